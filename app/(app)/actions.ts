@@ -1,0 +1,27 @@
+"use server";
+
+import { revalidatePath } from "next/cache";
+import { z } from "zod";
+import { serverAction } from "@/lib/server/action";
+import { renameOrganisation, setActiveOrganisation } from "@/lib/server/organisations";
+import { organisationNameSchema } from "@/lib/validation/organisation";
+
+/** Switch the organisation the signed-in pages show (any member of it). */
+export const switchOrganisation = serverAction(
+  z.strictObject({ organisationId: z.uuid("Choose an organisation.") }),
+  async ({ organisationId }, { user, db }) => {
+    await setActiveOrganisation(db, user, organisationId);
+    revalidatePath("/", "layout");
+    return { organisationId };
+  },
+);
+
+/** Rename an organisation (owners). */
+export const renameOrganisationAction = serverAction(
+  z.strictObject({ organisationId: z.uuid("Choose an organisation."), name: organisationNameSchema }),
+  async ({ organisationId, name }, { user, db }) => {
+    await renameOrganisation(db, user, organisationId, name);
+    revalidatePath("/", "layout");
+    return { name };
+  },
+);

@@ -1,0 +1,30 @@
+# App steps shared by start.sh and test.sh: install, migrate, seed, build. Sourced after lib.sh.
+
+prepare_machine() {
+  ensure_node
+  ensure_node_modules
+  ensure_env_file
+  ensure_postgres_running
+  ensure_app_role
+}
+
+load_env_file() { set -a; . ./.env; set +a; }
+
+migrate_and_seed() {
+  log "Applying migrations"
+  node_modules/.bin/tsx db/migrate.ts
+  log "Seeding the demo scenario"
+  SEED_REPORT="$(node_modules/.bin/tsx db/seed.ts)" || die "Seeding the demo scenario failed."
+}
+
+# Builds into the given folder unless a build there is newer than every source file.
+build_app() { # dist-dir
+  local dist="$1"
+  if [ -f "$dist/BUILD_ID" ] && [ -z "$(find app components lib db public types proxy.ts next.config.ts \
+      package-lock.json tsconfig.json postcss.config.mjs -newer "$dist/BUILD_ID" -print -quit 2>/dev/null)" ]; then
+    log "Build in $dist is up to date"
+    return 0
+  fi
+  log "Building the app into $dist"
+  NEXT_DIST_DIR="$dist" node_modules/.bin/next build
+}
