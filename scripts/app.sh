@@ -17,6 +17,11 @@ migrate_and_seed() {
   SEED_REPORT="$(node_modules/.bin/tsx db/seed.ts)" || die "Seeding the demo scenario failed."
 }
 
+# The self-hosted world basemap (public/tiles/world.pmtiles), built from npm data; skipped when up to date.
+build_tiles() {
+  node_modules/.bin/tsx scripts/build-tiles.ts || die "Building the map tiles failed."
+}
+
 # Builds into the given folder unless a build there is newer than every source file.
 build_app() { # dist-dir
   local dist="$1"

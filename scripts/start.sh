@@ -18,6 +18,7 @@ start_mail_fake 2525 2580 dev
 export FADELINE_DEV_INBOX=1
 
 migrate_and_seed
+build_tiles
 build_app .next
 
 cat <<MSG

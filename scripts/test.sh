@@ -26,6 +26,7 @@ stop_mail_fake test
 start_mail_fake 2526 2581 test
 trap 'stop_mail_fake test' EXIT
 migrate_and_seed
+build_tiles
 
 declare -a SUMMARY=()
 FAILED=0

@@ -27,6 +27,7 @@ export default defineConfig({
           environment: "node",
           include: ["tests/db/**/*.test.ts"],
           globalSetup: ["tests/db/global-setup.ts"],
+          setupFiles: ["tests/db/setup-file.ts"],
           testTimeout: 20_000,
           hookTimeout: 30_000,
         },
