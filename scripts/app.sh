@@ -25,7 +25,7 @@ build_tiles() {
 # Builds into the given folder unless a build there is newer than every source file.
 build_app() { # dist-dir
   local dist="$1"
-  if [ -f "$dist/BUILD_ID" ] && [ -z "$(find app components lib db public types proxy.ts next.config.ts \
+  if [ -f "$dist/BUILD_ID" ] && [ -z "$(find app components lib db public types tests proxy.ts next.config.ts playwright.config.ts \
       package-lock.json tsconfig.json postcss.config.mjs -newer "$dist/BUILD_ID" -print -quit 2>/dev/null)" ]; then
     log "Build in $dist is up to date"
     return 0

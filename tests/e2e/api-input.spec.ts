@@ -11,7 +11,7 @@ test.describe("bad input", () => {
   test("each malformed invitation request gets its own clear error and nothing is written", async ({ request }) => {
     const url = `/api/organisations/${DEMO.teamId}/invitations`;
     const before = (await (await request.get(url)).json()).invitations.length as number;
-    const send = (body: string, type = "application/json") => request.post(url, { data: body, headers: { "content-type": type } });
+    const send = (body: string, type = "application/json") => request.post(url, { data: Buffer.from(body), headers: { "content-type": type } });
 
     const malformed = await send("{\"email\": ");
     expect(malformed.status()).toBe(400);

@@ -48,7 +48,7 @@ test("a wrong password and an unknown address get the same generic message", asy
     await page.getByLabel("E-mail").fill(email!);
     await page.getByLabel("Password", { exact: true }).fill(password!);
     await page.getByRole("button", { name: "Sign in" }).click();
-    const alert = page.getByRole("alert").first();
+    const alert = page.locator("form [role=alert]").first();
     await expect(alert).toBeVisible();
     messages.push((await alert.textContent()) ?? "");
   }

@@ -12,7 +12,8 @@ test("an owner invites a planner, who follows the mailed link and joins the orga
   await page.getByLabel("Role", { exact: true }).selectOption("planner");
   await page.getByRole("button", { name: "Send invitation" }).click();
   await expect(page.getByText(`Invitation sent to ${email}.`)).toBeVisible();
-  const row = page.getByRole("row").filter({ hasText: email });
+  const invitations = page.locator("section").filter({ has: page.getByRole("heading", { name: "Invitations" }) });
+  const row = invitations.getByRole("row").filter({ hasText: email });
   await expect(row).toContainText("Waiting");
   await page.screenshot(shot("organisation-owner"));
 
@@ -40,5 +41,6 @@ test("an owner invites a planner, who follows the mailed link and joins the orga
   await again.close();
 
   await page.reload();
-  await expect(page.getByRole("row").filter({ hasText: email })).toContainText("Accepted");
+  await expect(row).toContainText("Accepted");
+  await expect(page.locator("section").filter({ has: page.getByRole("heading", { name: "Members" }) })).toContainText("Juno Fairweather");
 });

@@ -34,7 +34,7 @@ test("a direct POST of the owner's rename action is refused for a viewer and for
   const scratchId = (await (await ownerPage.request.get("/api/account")).json()).activeOrganisationId as string;
   await ownerPage.goto("/organisation");
   // Every hidden field React rendered for the rename form: the action reference, its bound state and key.
-  const fields = await ownerPage.locator("form:has(input[name='name'])").evaluate((form) =>
+  const fields = await ownerPage.locator("form").filter({ has: ownerPage.getByRole("button", { name: "Rename" }) }).evaluate((form) =>
     Object.fromEntries([...new FormData(form as HTMLFormElement).entries()].map(([k, v]) => [k, String(v)])),
   );
   expect(Object.keys(fields).some((k) => k.startsWith("$ACTION"))).toBe(true);
