@@ -1,0 +1,63 @@
+/**
+ * lib/thermal — the pure, isomorphic brake-heat model of Fadeline (thermal-model.md §1). The single public import
+ * point: `import { runHeatRun } from "@/lib/thermal"`. SI inside; temperatures in °C (names ending in C).
+ */
+
+export * from "./constants";
+export * from "./units";
+export type * from "./rig";
+export * from "./presets";
+export * from "./masses";
+export { isaAirDensity } from "./air";
+export { aeroDragForce, rollingResistanceForce, gradeForce } from "./road-load";
+export {
+  DYNAMIC_RADIUS_FACTOR,
+  motoringFmepPa,
+  motoringPowerW,
+  engineRpm,
+  chooseDescentGear,
+  engineBrakingWheelPowerW,
+} from "./engine";
+export {
+  convectiveConductance,
+  radiationCoefficient,
+  specificHeat,
+  brakeConductanceScale,
+  radiatingAreaM2,
+} from "./cooling";
+export { exactStepC, timeToReachC } from "./exact-step";
+export { heatPartitionRotor, splitRetardingWork, type MaterialProperties } from "./partition";
+export { FLUID_PROXY_LABEL, fluidProxyStepC } from "./fluid";
+export * from "./thresholds";
+export * from "./params";
+export { resolveModel, type BrakePosition, type BrakePositionSpec, type FluidSpec, type ResolvedModel } from "./resolve";
+export {
+  standstillConductanceWK,
+  coolBrakeAtStandstill,
+  timeToCoolAtStandstillS,
+  coolStateAtStandstill,
+  standstillTimeToReach,
+  type ThermalState,
+} from "./standstill";
+export { prepareRoute, type PreparedRoute } from "./prepare-route";
+export { targetSpeeds, heldSpeeds, isDescentStep, fixedGearSpeedLimit } from "./speed-profile";
+export type { HeatTrace, StepEnergies } from "./trace";
+export {
+  runHeatRun,
+  runConvoyHeatRuns,
+  runPrepared,
+  initialState,
+  stopDurations,
+  type CoolDownStop,
+  type HeatRunOptions,
+  type HeatRunResult,
+} from "./heat-run";
+export {
+  summarizeDescents,
+  type DescentRange,
+  type DescentSummary,
+  type EnergyAccount,
+  type PositionSummary,
+} from "./summary";
+export { validateRig } from "./validate-rig";
+export { validateRouteProfile, validateHeatRunOptions } from "./validate-run";

@@ -1,0 +1,51 @@
+/**
+ * Per-step route quantities that do not depend on the rig, computed once and shared by every rig of a convoy.
+ * Step i runs from sample i to sample i+1; a step flagged in `gapAfter` is not driven (length 0, no energy).
+ */
+
+import type { RouteProfile } from "@/lib/route/types";
+import { isaAirDensity } from "./air";
+
+/** A route profile with its per-step quantities. Arrays have the profile's length n; entry n−1 is unused (0). */
+export interface PreparedRoute {
+  /** The profile itself. */
+  profile: RouteProfile;
+  /** Sample count. */
+  n: number;
+  /** Driven length of each step along the slope √(Δx² + Δh²), m; 0 across a gap. */
+  pathM: Float64Array;
+  /** Height lost over each step h_i − h_(i+1), m (negative when climbing); 0 across a gap. */
+  dropM: Float64Array;
+  /** Horizontal run of each step Δx, m (rolling work is Crr·m·g·Δx); 0 across a gap. */
+  runM: Float64Array;
+  /** ISA air density at each step's mean elevation, kg/m³. */
+  densityKgM3: Float64Array;
+}
+
+/**
+ * Compute the rig-independent per-step quantities of a (validated) profile.
+ * @param profile the route profile
+ * @returns the prepared route
+ * @example prepareRoute(profile).pathM[0] // length of the first step, m
+ */
+export function prepareRoute(profile: RouteProfile): PreparedRoute {
+  const n = profile.distanceM.length;
+  const pathM = new Float64Array(n);
+  const dropM = new Float64Array(n);
+  const runM = new Float64Array(n);
+  const densityKgM3 = new Float64Array(n);
+  const d = profile.distanceM;
+  const e = profile.elevationM;
+  for (let i = 0; i + 1 < n; i++) {
+    const h0 = e[i] as number;
+    const h1 = e[i + 1] as number;
+    densityKgM3[i] = isaAirDensity(0.5 * (h0 + h1));
+    if (profile.gapAfter[i] === 1) continue;
+    const dx = (d[i + 1] as number) - (d[i] as number);
+    const dh = h1 - h0;
+    runM[i] = dx;
+    dropM[i] = -dh;
+    pathM[i] = Math.sqrt(dx * dx + dh * dh);
+  }
+  return { profile, n, pathM, dropM, runM, densityKgM3 };
+}
