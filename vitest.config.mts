@@ -18,7 +18,7 @@ export default defineConfig({
           name: "unit",
           environment: "node",
           include: ["tests/unit/**/*.test.ts"],
-        },
+              },
       },
       {
         resolve: { alias },
@@ -33,6 +33,5 @@ export default defineConfig({
         },
       },
     ],
-    benchmark: { include: ["tests/bench/**/*.bench.ts"] },
   },
 });
