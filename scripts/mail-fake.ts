@@ -10,16 +10,8 @@ import { createServer } from "node:http";
 import { simpleParser } from "mailparser";
 import { SMTPServer } from "smtp-server";
 import { parseArgs } from "node:util";
+import type { CapturedMail as Captured } from "../lib/dev-mail";
 
-interface Captured {
-  id: number;
-  from: string;
-  to: string[];
-  subject: string;
-  date: string;
-  text: string;
-  html: string | null;
-}
 
 const { values } = parseArgs({
   options: { "smtp-port": { type: "string", default: "2525" }, "http-port": { type: "string", default: "2580" } },

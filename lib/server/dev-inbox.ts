@@ -1,14 +1,5 @@
 import "server-only";
-
-export interface CapturedMail {
-  id: number;
-  from: string;
-  to: string[];
-  subject: string;
-  date: string;
-  text: string;
-  html: string | null;
-}
+import type { CapturedMail } from "@/lib/dev-mail";
 
 /** Mail the local fake (scripts/mail-fake.ts) has captured, newest first. */
 export async function listCapturedMail(): Promise<CapturedMail[]> {

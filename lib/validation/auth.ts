@@ -1,5 +1,6 @@
 import { z } from "zod";
 import { isCommonPassword } from "@/lib/auth/common-passwords";
+import { singleLine } from "./text";
 
 /** A trimmed, lower-cased address in the form zod's e-mail check accepts (no quoted local parts). */
 export const emailSchema = z
@@ -23,12 +24,7 @@ export const newPasswordSchema = z
   .max(PASSWORD_MAX, `Use at most ${PASSWORD_MAX} characters.`)
   .refine((p) => !isCommonPassword(p), "That password is on the list of the most common ones. Choose another.");
 
-export const personNameSchema = z
-  .string({ error: "Enter your name." })
-  .trim()
-  .min(1, "Enter your name.")
-  .max(80, "Use at most 80 characters.")
-  .refine((s) => !/[\r\n\u0000]/.test(s), "A name cannot contain line breaks.");
+export const personNameSchema = singleLine({ empty: "Enter your name.", max: 80 });
 
 export const signUpSchema = z.strictObject({
   name: personNameSchema,

@@ -1,13 +1,9 @@
 import { z } from "zod";
 import { ROLES } from "@/lib/auth/permissions";
 import { emailSchema, newPasswordSchema, personNameSchema, tokenSchema } from "./auth";
+import { singleLine } from "./text";
 
-export const organisationNameSchema = z
-  .string({ error: "Enter a name." })
-  .trim()
-  .min(1, "Enter a name.")
-  .max(100, "Use at most 100 characters.")
-  .refine((s) => !/[\r\n\u0000]/.test(s), "A name cannot contain line breaks.");
+export const organisationNameSchema = singleLine({ empty: "Enter a name.", max: 100 });
 
 export const roleSchema = z.enum(ROLES, { error: "Choose owner, planner or viewer." });
 
