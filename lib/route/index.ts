@@ -33,6 +33,8 @@ export type { SelectTrackResult } from "./select-track";
 export { selectTrack } from "./select-track";
 export type { SmoothElevationOptions } from "./smooth-elevation";
 export { smoothElevation } from "./smooth-elevation";
+export type { RouteView, RouteViewOptions } from "./route-view";
+export { buildRouteView } from "./route-view";
 export type { RouteProfile } from "./types";
 export type { Ellipsoid } from "./wgs84";
 export { WGS84 } from "./wgs84";

@@ -1,0 +1,61 @@
+/**
+ * Showing SI values in the user's unit system. Conversion factors are exact by definition: the international
+ * foot is 0.3048 m and the international mile 1609.344 m (International Yard and Pound Agreement, 1959;
+ * NIST SP 811 App. B); the avoirdupois pound is 0.45359237 kg (same agreement).
+ */
+export type UnitSystem = "metric" | "imperial";
+export const UNIT_SYSTEMS: readonly UnitSystem[] = ["metric", "imperial"];
+
+export const M_PER_FT = 0.3048;
+export const M_PER_MI = 1609.344;
+export const KG_PER_LB = 0.45359237;
+
+const fmt = (value: number, digits: number) =>
+  value.toLocaleString("en", { minimumFractionDigits: digits, maximumFractionDigits: digits });
+
+/** A route length: km or mi, one decimal under 100. */
+export function formatDistance(m: number, system: UnitSystem): string {
+  const v = system === "metric" ? m / 1000 : m / M_PER_MI;
+  return `${fmt(v, Math.abs(v) < 100 ? 1 : 0)} ${system === "metric" ? "km" : "mi"}`;
+}
+
+/** An elevation or height difference: m or ft, whole numbers. */
+export function formatElevation(m: number, system: UnitSystem): string {
+  return system === "metric" ? `${fmt(m, 0)} m` : `${fmt(m / M_PER_FT, 0)} ft`;
+}
+
+/** A grade (rise over run) as a percentage; descents negative. */
+export function formatGrade(grade: number): string {
+  return `${fmt(grade * 100, 1)} %`;
+}
+
+/** A speed given in m/s: km/h or mph. */
+export function formatSpeed(ms: number, system: UnitSystem): string {
+  return system === "metric" ? `${fmt(ms * 3.6, 0)} km/h` : `${fmt((ms * 3600) / M_PER_MI, 0)} mph`;
+}
+
+/** A temperature given in °C: °C or °F. */
+export function formatTemperature(c: number, system: UnitSystem): string {
+  return system === "metric" ? `${fmt(c, 0)} °C` : `${fmt((c * 9) / 5 + 32, 0)} °F`;
+}
+
+/** A mass given in kg: kg or lb. */
+export function formatMass(kg: number, system: UnitSystem): string {
+  return system === "metric" ? `${fmt(kg, 0)} kg` : `${fmt(kg / KG_PER_LB, 0)} lb`;
+}
+
+/** Unit label for axis titles. */
+export function distanceUnit(system: UnitSystem): "km" | "mi" {
+  return system === "metric" ? "km" : "mi";
+}
+export function elevationUnit(system: UnitSystem): "m" | "ft" {
+  return system === "metric" ? "m" : "ft";
+}
+/** Converts metres to the display unit of distances (km or mi). */
+export function toDistanceUnit(m: number, system: UnitSystem): number {
+  return system === "metric" ? m / 1000 : m / M_PER_MI;
+}
+/** Converts metres to the display unit of elevations (m or ft). */
+export function toElevationUnit(m: number, system: UnitSystem): number {
+  return system === "metric" ? m : m / M_PER_FT;
+}
