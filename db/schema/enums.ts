@@ -5,3 +5,6 @@ export const roleEnum = pgEnum("role", ["owner", "planner", "viewer"]);
 
 /** A team organisation (a tour operator) or the personal one every user gets at sign-up. */
 export const organisationKindEnum = pgEnum("organisation_kind", ["team", "personal"]);
+
+/** The units a user reads figures in (see lib/units). */
+export const unitSystemEnum = pgEnum("unit_system", ["metric", "imperial"]);

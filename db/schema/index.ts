@@ -7,3 +7,4 @@ export * from "./sign-in-attempts";
 export * from "./audit-events";
 export * from "./email-tokens";
 export * from "./rate-limit-hits";
+export * from "./routes";

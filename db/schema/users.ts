@@ -1,5 +1,6 @@
 import { sql } from "drizzle-orm";
 import { check, index, integer, pgTable, text, timestamp, uniqueIndex, uuid } from "drizzle-orm/pg-core";
+import { unitSystemEnum } from "./enums";
 import { organisations } from "./organisations";
 
 export const users = pgTable(
@@ -18,6 +19,8 @@ export const users = pgTable(
     }),
     /** Bumped by "sign out everywhere": a session token carrying an older value is refused. */
     sessionVersion: integer("session_version").notNull().default(0),
+    /** How figures are shown to this user; everything is stored in SI. */
+    unitSystem: unitSystemEnum("unit_system").notNull().default("metric"),
     createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
     updatedAt: timestamp("updated_at", { withTimezone: true }).notNull().defaultNow(),
   },

@@ -35,6 +35,8 @@ export type { SmoothElevationOptions } from "./smooth-elevation";
 export { smoothElevation } from "./smooth-elevation";
 export type { RouteView, RouteViewOptions } from "./route-view";
 export { buildRouteView } from "./route-view";
+export type { PlacedWaypoint } from "./place-waypoints";
+export { placeWaypoints } from "./place-waypoints";
 export type { RouteProfile } from "./types";
 export type { Ellipsoid } from "./wgs84";
 export { WGS84 } from "./wgs84";

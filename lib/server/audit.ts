@@ -14,6 +14,9 @@ export const AUDIT_ACTIONS = {
   "invitation.created": "invited someone",
   "invitation.revoked": "withdrew an invitation",
   "invitation.accepted": "accepted an invitation",
+  "route.uploaded": "uploaded a route",
+  "route.renamed": "renamed a route",
+  "route.deleted": "deleted a route",
 } as const;
 export type AuditAction = keyof typeof AUDIT_ACTIONS;
 
@@ -21,7 +24,7 @@ export interface AuditInput {
   organisationId: string;
   actorUserId: string | null;
   action: AuditAction;
-  targetType: "organisation" | "member" | "invitation";
+  targetType: "organisation" | "member" | "invitation" | "route";
   targetId: string;
   detail?: Record<string, string | number | boolean | null>;
 }

@@ -16,6 +16,9 @@ const ACTION_TEXT: Record<string, string> = {
   "invitation.created": "Sent an invitation",
   "invitation.revoked": "Withdrew an invitation",
   "invitation.accepted": "Accepted an invitation",
+  "route.uploaded": "Uploaded a route",
+  "route.renamed": "Renamed a route",
+  "route.deleted": "Deleted a route",
 };
 
 function describe(detail: Row["detail"]): string {
