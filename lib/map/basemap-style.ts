@@ -67,6 +67,26 @@ export interface BasemapStyleOptions {
   fontFamily?: string;
   /** Source id of the world archive; default `world`. */
   sourceId?: string;
+  /** Regional archives drawn above the world layers, in order (later ones on top). */
+  extracts?: readonly BasemapExtract[];
+}
+
+/**
+ * A regional PMTiles archive with the world archive's layer names (`land`, `boundary`, `place`, and
+ * optionally `water`). Its fills are drawn above the world fills, its borders above the world borders and its
+ * labels with (above) the world labels, so a finer regional coastline and its places win where both exist.
+ */
+export interface BasemapExtract {
+  /** Lower-case id (letters, digits, dashes); the source is `extract-<id>`, its layers `extract-<id>-…`. */
+  id: string;
+  /** Where the archive is served, e.g. `/tiles/demo-region.pmtiles` (see {@link pmtilesUrl}). */
+  url: string;
+  /** Data credit, plain text (escaped here, since MapLibre shows attributions as HTML). */
+  attribution: string;
+  /** Lowest zoom at which the extract is drawn (below it only the world shows); default: the archive's. */
+  minzoom?: number;
+  /** Highest zoom stored in the archive (MapLibre overzooms above it); default: the archive's. */
+  maxzoom?: number;
 }
 
 /** Data credits of the world archive (HTML, shown by MapLibre's attribution control). */
@@ -99,13 +119,14 @@ interface LabelSpec {
   maxzoom?: number;
 }
 
-function placeLabel(spec: LabelSpec, source: string, halo: string): LayerSpecification {
+function placeLabel(spec: LabelSpec, source: string, halo: string, idPrefix = "", minzoomFloor = 0): LayerSpecification {
+  const minzoom = Math.max(spec.minzoom ?? 0, minzoomFloor);
   return {
-    id: spec.id,
+    id: idPrefix ? `${idPrefix}-${spec.id.replace(/^basemap-/, "")}` : spec.id,
     type: "symbol",
     source,
     "source-layer": "place",
-    ...(spec.minzoom === undefined ? {} : { minzoom: spec.minzoom }),
+    ...(minzoom > 0 ? { minzoom } : {}),
     ...(spec.maxzoom === undefined ? {} : { maxzoom: spec.maxzoom }),
     filter: ["in", ["get", "kind"], ["literal", spec.kinds]],
     layout: {
@@ -121,14 +142,20 @@ function placeLabel(spec: LabelSpec, source: string, halo: string): LayerSpecifi
   };
 }
 
+/** Escapes text for an HTML attribution string. */
+function escapeHtml(text: string): string {
+  return text.replace(/[&<>"']/g, (ch) => `&#${ch.charCodeAt(0)};`);
+}
+
 const zoomRamp = (...stops: number[]): ExpressionSpecification =>
   ["interpolate", ["linear"], ["zoom"], ...stops] as ExpressionSpecification;
 
 /**
- * Builds the basemap style: background (water), land, country borders and place labels.
+ * Builds the basemap style: background (water), land, country borders and place labels, with any regional
+ * extracts layered above the world's (see {@link BasemapExtract}).
  * @param archiveUrl where the world PMTiles archive is served (see {@link pmtilesUrl}); register
  *   `pmtiles.Protocol` with `maplibregl.addProtocol("pmtiles", protocol.tile)` before creating the map
- * @param options theme, colour overrides, label font family, source id
+ * @param options theme, colour overrides, label font family, source id, regional extracts
  * @returns a MapLibre style specification (version 8) without `glyphs` or `sprite`
  */
 export function basemapStyle(archiveUrl: string, options: BasemapStyleOptions = {}): StyleSpecification {
@@ -163,28 +190,54 @@ export function basemapStyle(archiveUrl: string, options: BasemapStyleOptions = 
       extraLayout: { "text-transform": "uppercase", "text-letter-spacing": 0.12, "text-max-width": 7, "symbol-sort-key": ["get", "minzoom"] },
     },
   ];
+  const extracts = (options.extracts ?? []).map((x) => ({ ...x, source: `extract-${x.id}`, prefix: `extract-${x.id}` }));
+  const floor = (x: BasemapExtract) => (x.minzoom && x.minzoom > 0 ? { minzoom: x.minzoom } : {});
+  const boundaryPaint = {
+    "line-color": c.boundary,
+    "line-width": ["interpolate", ["linear"], ["zoom"], 1, 0.4, 6, 1, 12, 1.6],
+    "line-dasharray": [3, 2],
+  } satisfies Extract<LayerSpecification, { type: "line" }>["paint"];
   return {
     version: 8,
     name: "Fadeline basemap",
     sources: {
       [source]: { type: "vector", url: pmtilesUrl(archiveUrl), attribution: BASEMAP_ATTRIBUTION },
+      ...Object.fromEntries(
+        extracts.map((x) => [
+          x.source,
+          {
+            type: "vector" as const,
+            url: pmtilesUrl(x.url),
+            attribution: escapeHtml(x.attribution),
+            ...(x.minzoom === undefined ? {} : { minzoom: x.minzoom }),
+            ...(x.maxzoom === undefined ? {} : { maxzoom: x.maxzoom }),
+          },
+        ]),
+      ),
     },
     layers: [
       { id: "basemap-background", type: "background", paint: { "background-color": c.water } },
       { id: "basemap-land", type: "fill", source, "source-layer": "land", paint: { "fill-color": c.land } },
-      {
-        id: "basemap-boundary",
-        type: "line",
-        source,
-        "source-layer": "boundary",
-        layout: { "line-join": "round" },
-        paint: {
-          "line-color": c.boundary,
-          "line-width": ["interpolate", ["linear"], ["zoom"], 1, 0.4, 6, 1, 12, 1.6],
-          "line-dasharray": [3, 2],
-        },
-      },
+      // An extract's water is drawn over its own land, so it can also cut the world's coarser coastline back.
+      ...extracts.flatMap((x): LayerSpecification[] => [
+        { id: `${x.prefix}-land`, type: "fill", source: x.source, "source-layer": "land", ...floor(x), paint: { "fill-color": c.land } },
+        { id: `${x.prefix}-water`, type: "fill", source: x.source, "source-layer": "water", ...floor(x), paint: { "fill-color": c.water } },
+      ]),
+      { id: "basemap-boundary", type: "line", source, "source-layer": "boundary", layout: { "line-join": "round" }, paint: boundaryPaint },
+      ...extracts.map(
+        (x): LayerSpecification => ({
+          id: `${x.prefix}-boundary`,
+          type: "line",
+          source: x.source,
+          "source-layer": "boundary",
+          ...floor(x),
+          layout: { "line-join": "round" },
+          paint: boundaryPaint,
+        }),
+      ),
       ...labels.map((spec) => placeLabel(spec, source, c.halo)),
+      // Later symbol layers are placed first, so an extract's labels win collisions with the world's.
+      ...extracts.flatMap((x) => labels.map((spec) => placeLabel(spec, x.source, c.halo, x.prefix, x.minzoom ?? 0))),
     ],
   };
 }

@@ -6,12 +6,14 @@ import { getDb } from "@/db";
 import { users } from "@/db/schema";
 import { authOptions } from "@/lib/auth/options";
 import { unauthenticated } from "@/lib/errors";
+import type { UnitSystem } from "@/lib/units";
 import { isUuid, type Actor } from "./access";
 
 export interface SessionUser extends Actor {
   name: string;
   email: string;
   activeOrganisationId: string | null;
+  unitSystem: UnitSystem;
 }
 
 /**
@@ -28,13 +30,14 @@ export const getSessionUser = cache(async (): Promise<SessionUser | null> => {
       name: users.name,
       email: users.email,
       activeOrganisationId: users.activeOrganisationId,
+      unitSystem: users.unitSystem,
       sessionVersion: users.sessionVersion,
       verified: users.emailVerifiedAt,
     })
     .from(users)
     .where(eq(users.id, id));
   if (!row || !row.verified || row.sessionVersion !== session.user.sessionVersion) return null;
-  return { userId: row.userId, name: row.name, email: row.email, activeOrganisationId: row.activeOrganisationId };
+  return { userId: row.userId, name: row.name, email: row.email, activeOrganisationId: row.activeOrganisationId, unitSystem: row.unitSystem };
 });
 
 /** For route handlers and server actions: the user, or a 401. */

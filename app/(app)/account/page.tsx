@@ -2,6 +2,7 @@ import type { Metadata } from "next";
 import { PageHeader, Card, CardHeader } from "@/components/ui/card";
 import { requireWorkContext } from "@/lib/server/work-context";
 import { SignOutEverywhere } from "./sign-out-everywhere";
+import { UnitSystemForm } from "./unit-system-form";
 
 export const metadata: Metadata = { title: "Your account" };
 
@@ -21,6 +22,12 @@ export default async function AccountPage() {
             <dt className="text-ink-muted">Organisations</dt>
             <dd>{organisations.map((o) => `${o.name} (${o.role})`).join(", ")}</dd>
           </dl>
+        </Card>
+        <Card>
+          <CardHeader title="Units" description="Everything is stored in SI; this only changes how figures are shown to you." />
+          <div className="p-5">
+            <UnitSystemForm current={user.unitSystem} />
+          </div>
         </Card>
         <Card>
           <CardHeader title="Sessions" description="Lost a phone or used a shared computer? End every session at once." />

@@ -1,22 +1,28 @@
 import type { Metadata } from "next";
+import { getDb } from "@/db";
 import { PageHeader } from "@/components/ui/card";
-import { EmptyState } from "@/components/ui/empty-state";
+import { can } from "@/lib/auth/permissions";
+import { listRoutes } from "@/lib/server/routes/routes-dal";
 import { requireWorkContext } from "@/lib/server/work-context";
+import { RoutesView } from "./_components/routes-view";
 
 export const metadata: Metadata = { title: "Routes" };
 
 export default async function RoutesPage() {
-  const { active } = await requireWorkContext("/routes");
+  const { user, active } = await requireWorkContext("/routes");
+  const routes = await listRoutes(getDb(), user, active.id);
   return (
     <>
       <PageHeader
         title="Routes"
-        description={`The GPX tracks ${active.name} plans to drive, cleaned up, with every descent found and measured.`}
+        description={`The GPX tracks ${active.name} plans to drive. Fadeline cleans each track, smooths its elevation and finds every descent of at least 60 m over 1 km.`}
       />
-      <EmptyState title="No routes yet">
-        Uploading GPX files is not open yet. When it is, you will drop a file here and see its length, climbs and
-        descents before saving it.
-      </EmptyState>
+      <RoutesView
+        organisationId={active.id}
+        canWrite={can(active.role, "content.create")}
+        unitSystem={user.unitSystem}
+        initialRoutes={routes}
+      />
     </>
   );
 }
