@@ -8,6 +8,10 @@ import { sql } from "drizzle-orm";
 import { closeDb, getDb } from "./index";
 import { memberships, organisations, users } from "./schema";
 import { hashPassword } from "../lib/auth/password";
+import { createHash } from "node:crypto";
+import { runGpxJob } from "../lib/server/routes/gpx-job";
+import { createRoute, findRouteByContent } from "../lib/server/routes/routes-dal";
+import { demoRoutes } from "./demo/generate-routes";
 
 export const DEMO_PASSWORD = "switchback-demo-2026";
 
@@ -62,8 +66,39 @@ export function describeDemoAccounts(): string {
   return [`  Demo accounts (password for each: ${DEMO_PASSWORD}):`, ...rows].join("\n");
 }
 
+/**
+ * The demo routes of the invented Tallow Island (db/demo): all of them for the tour operator, uploaded by its
+ * planner, and the long pass crossing for the caravan owner. Already-seeded routes are found by content.
+ */
+export async function seedDemoRoutes(): Promise<void> {
+  const db = getDb();
+  const planner = DEMO_USERS[1];
+  const caravan = DEMO_USERS[3];
+  const targets = [
+    ...demoRoutes().map((route) => ({ route, organisationId: TEAM.id, userId: planner.id })),
+    ...demoRoutes()
+      .filter((r) => r.slug === "tallowmere-to-kestrel-gap")
+      .map((route) => ({ route, organisationId: personalOrgId(caravan.id), userId: caravan.id })),
+  ];
+  for (const { route, organisationId, userId } of targets) {
+    const bytes = Buffer.from(route.gpx, "utf8");
+    const hash = createHash("sha256").update(bytes).digest("hex");
+    if (await findRouteByContent(db, organisationId, hash, null)) continue;
+    const processed = runGpxJob(route.gpx);
+    if (!processed.ok) throw new Error(`demo route ${route.slug}: ${processed.problems[0]?.message}`);
+    await createRoute(db, { userId }, organisationId, {
+      name: route.name,
+      fileName: `${route.slug}.gpx`,
+      contentSha256: hash,
+      gpx: bytes,
+      processed,
+    });
+  }
+}
+
 if (process.argv[1]?.endsWith("seed.ts")) {
   seedDemo()
+    .then(() => seedDemoRoutes())
     .then(() => console.log(describeDemoAccounts()))
     .catch((error: unknown) => {
       console.error("seeding failed:", error instanceof Error ? error.message : error);

@@ -14,12 +14,14 @@ migrate_and_seed() {
   log "Applying migrations"
   node_modules/.bin/tsx db/migrate.ts
   log "Seeding the demo scenario"
-  SEED_REPORT="$(node_modules/.bin/tsx db/seed.ts)" || die "Seeding the demo scenario failed."
+  # The react-server condition lets the seed use the server-only data-access layer.
+  SEED_REPORT="$(node --conditions=react-server --import tsx db/seed.ts)" || die "Seeding the demo scenario failed."
 }
 
 # The self-hosted world basemap (public/tiles/world.pmtiles), built from npm data; skipped when up to date.
 build_tiles() {
   node_modules/.bin/tsx scripts/build-tiles.ts || die "Building the map tiles failed."
+  node_modules/.bin/tsx scripts/build-demo-region.ts || die "Building the demo region's map tiles failed."
 }
 
 # Builds into the given folder unless a build there is newer than every source file.

@@ -176,6 +176,16 @@ export function basemapStyle(archiveUrl: string, options: BasemapStyleOptions = 
       minzoom: 9,
       extraLayout: { "text-padding": 6 },
     },
+    // Passes, lookouts and camps: only regional extracts carry them; they name the stops advice points to.
+    {
+      id: "basemap-place-landmark",
+      kinds: ["pass", "lookout", "camp"],
+      font: regular,
+      color: c.labelMuted,
+      size: zoomRamp(10, 10, 14, 12.5),
+      minzoom: 10,
+      extraLayout: { "text-padding": 4, "text-letter-spacing": 0.04 },
+    },
     { id: "basemap-place-town", kinds: ["town"], font: regular, color: c.labelMuted, size: zoomRamp(6, 10.5, 14, 14) },
     { id: "basemap-place-city", kinds: ["city"], font: medium, color: c.label, size: zoomRamp(2, 11, 8, 14, 14, 17) },
     {

@@ -1,30 +1,19 @@
 /**
  * Worker-thread entry: parses and processes one GPX text off the request thread. The parent gives it a
  * memory ceiling and a time limit and terminates it past them, so a hostile file cannot stall the server.
+ * Compiled to build/workers/gpx-worker.mjs by scripts/build-workers.mjs.
  */
 import { parentPort, workerData } from "node:worker_threads";
-import { buildRouteView, placeWaypoints, processGpx } from "@/lib/route";
+import { runGpxJob } from "./gpx-job";
 
-interface Job {
-  text: string;
-  trackId?: string;
-}
-
-const job = workerData as Job;
+const job = workerData as { text: string; trackId?: string };
 try {
-  const result = processGpx(job.text, { trackId: job.trackId });
-  if (!result.ok) {
-    parentPort?.postMessage({ ok: false, problems: result.problems, tracks: result.tracks ?? [] });
-  } else {
-    const { profile, descents, stats, tracks, trackId, warnings, gpx } = result;
-    const track = gpx.tracks.find((t) => t.id === trackId) ?? gpx.routes.find((r) => r.id === trackId);
-    const pointCount = track ? track.segments.reduce((sum, s) => sum + s.length, 0) : 0;
-    const view = buildRouteView(profile, descents, stats);
-    const waypoints = placeWaypoints(profile, gpx.waypoints);
-    parentPort?.postMessage(
-      { ok: true, profile, descents, stats, tracks, trackId, warnings, view, waypoints, pointCount, name: track?.name ?? gpx.name },
-      [profile.distanceM, profile.lat, profile.lon, profile.elevationM, profile.grade, profile.curveRadiusM, profile.gapAfter].map((a) => a.buffer as ArrayBuffer),
-    );
+  const result = runGpxJob(job.text, job.trackId);
+  if (!result.ok) parentPort?.postMessage(result);
+  else {
+    const p = result.profile;
+    const transfer = [p.distanceM, p.lat, p.lon, p.elevationM, p.grade, p.curveRadiusM, p.gapAfter].map((a) => a.buffer as ArrayBuffer);
+    parentPort?.postMessage(result, transfer);
   }
 } catch (error) {
   parentPort?.postMessage({ ok: false, crashed: true, message: error instanceof Error ? error.message : String(error) });
