@@ -27,7 +27,7 @@ build_tiles() {
 # Builds into the given folder unless a build there is newer than every source file.
 build_app() { # dist-dir
   local dist="$1"
-  if [ -f "$dist/BUILD_ID" ] && [ -f build/workers/gpx-worker.mjs ] && [ -z "$(find app components lib db public scripts types tests proxy.ts next.config.ts playwright.config.ts \
+  if [ -f "$dist/BUILD_ID" ] && [ -f build/workers/gpx-worker.mjs ] && [ -f build/workers/heat-worker.mjs ] && [ -z "$(find app components lib db public scripts types tests proxy.ts next.config.ts playwright.config.ts \
       package-lock.json tsconfig.json postcss.config.mjs -newer "$dist/BUILD_ID" -print -quit 2>/dev/null)" ]; then
     log "Build in $dist is up to date"
     return 0

@@ -7,7 +7,7 @@ import { fileURLToPath } from "node:url";
 const root = fileURLToPath(new URL("..", import.meta.url));
 const started = Date.now();
 await build({
-  entryPoints: { "gpx-worker": "lib/server/routes/gpx-worker.ts" },
+  entryPoints: { "gpx-worker": "lib/server/routes/gpx-worker.ts", "heat-worker": "lib/server/analyses/heat-worker.ts" },
   absWorkingDir: root,
   outdir: "build/workers",
   outExtension: { ".js": ".mjs" },

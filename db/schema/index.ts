@@ -8,3 +8,4 @@ export * from "./audit-events";
 export * from "./email-tokens";
 export * from "./rate-limit-hits";
 export * from "./routes";
+export * from "./rigs";

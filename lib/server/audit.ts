@@ -17,6 +17,9 @@ export const AUDIT_ACTIONS = {
   "route.uploaded": "uploaded a route",
   "route.renamed": "renamed a route",
   "route.deleted": "deleted a route",
+  "rig.created": "added a rig",
+  "rig.updated": "changed a rig",
+  "rig.deleted": "deleted a rig",
 } as const;
 export type AuditAction = keyof typeof AUDIT_ACTIONS;
 
@@ -24,7 +27,7 @@ export interface AuditInput {
   organisationId: string;
   actorUserId: string | null;
   action: AuditAction;
-  targetType: "organisation" | "member" | "invitation" | "route";
+  targetType: "organisation" | "member" | "invitation" | "route" | "rig";
   targetId: string;
   detail?: Record<string, string | number | boolean | null>;
 }

@@ -10,7 +10,7 @@ export function applyTestEnv(overrides: Record<string, string> = {}): void {
     SMTP_URL: "smtp://127.0.0.1:2526",
     MAIL_FROM: "Fadeline <no-reply@fadeline.invalid>",
     TRUSTED_PROXY_HOPS: "0",
-    FADELINE_GPX_WORKER_URL: new URL("./gpx-worker.mjs", import.meta.url).href,
+    FADELINE_WORKER_BOOTSTRAP_DIR: new URL("./workers/", import.meta.url).href,
   };
   for (const [key, value] of Object.entries({ ...defaults, ...overrides })) {
     if (overrides[key] !== undefined || process.env[key] === undefined) process.env[key] = value;

@@ -19,6 +19,9 @@ const ACTION_TEXT: Record<string, string> = {
   "route.uploaded": "Uploaded a route",
   "route.renamed": "Renamed a route",
   "route.deleted": "Deleted a route",
+  "rig.created": "Added a rig",
+  "rig.updated": "Changed a rig",
+  "rig.deleted": "Deleted a rig",
 };
 
 function describe(detail: Row["detail"]): string {

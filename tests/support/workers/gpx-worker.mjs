@@ -2,4 +2,4 @@
 // The built app never uses this file; it runs the bundled entry (lib/server/routes/process-upload.ts).
 import { tsImport } from "tsx/esm/api";
 
-await tsImport("../../lib/server/routes/gpx-worker.ts", import.meta.url);
+await tsImport("../../../lib/server/routes/gpx-worker.ts", import.meta.url);
