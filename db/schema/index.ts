@@ -9,3 +9,4 @@ export * from "./email-tokens";
 export * from "./rate-limit-hits";
 export * from "./routes";
 export * from "./rigs";
+export * from "./plans";

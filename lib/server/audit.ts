@@ -20,6 +20,10 @@ export const AUDIT_ACTIONS = {
   "rig.created": "added a rig",
   "rig.updated": "changed a rig",
   "rig.deleted": "deleted a rig",
+  "plan.created": "created a plan",
+  "plan.updated": "changed a plan",
+  "plan.deleted": "deleted a plan",
+  "scenario.saved": "saved a scenario",
 } as const;
 export type AuditAction = keyof typeof AUDIT_ACTIONS;
 
@@ -27,7 +31,7 @@ export interface AuditInput {
   organisationId: string;
   actorUserId: string | null;
   action: AuditAction;
-  targetType: "organisation" | "member" | "invitation" | "route" | "rig";
+  targetType: "organisation" | "member" | "invitation" | "route" | "rig" | "plan";
   targetId: string;
   detail?: Record<string, string | number | boolean | null>;
 }

@@ -8,6 +8,7 @@ import { AppError, notFound } from "@/lib/errors";
 import type { SavedRigInput } from "@/lib/validation/rig";
 import { isUuid, requireAccess, type Actor } from "../access";
 import { recordAudit } from "../audit";
+import { plansUsing } from "../plans/plans-dal";
 
 const columns = {
   id: rigs.id,
@@ -75,6 +76,8 @@ export async function updateRig(db: DbOrTx, actor: Actor, rigId: string, input: 
 
 export async function deleteRig(db: DbOrTx, actor: Actor, rigId: string) {
   const { organisationId } = await guard(db, actor, rigId, "content.delete");
+  const usedBy = await plansUsing(db, { rigId });
+  if (usedBy.length) throw new AppError("conflict", `This rig is in ${usedBy.length === 1 ? "the plan" : "the plans"} ${usedBy.map((n) => `“${n}”`).join(", ")}. Take it out of ${usedBy.length === 1 ? "that plan" : "those plans"} first.`);
   await db.transaction(async (tx) => {
     const [row] = await tx.delete(rigs).where(eq(rigs.id, rigId)).returning({ name: rigs.name });
     await recordAudit(tx, { organisationId, actorUserId: actor.userId, action: "rig.deleted", targetType: "rig", targetId: rigId, detail: { name: row?.name ?? null } });

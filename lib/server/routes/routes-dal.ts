@@ -2,7 +2,8 @@ import "server-only";
 import { and, desc, eq, sql } from "drizzle-orm";
 import type { DbOrTx } from "@/db";
 import { routes, users } from "@/db/schema";
-import { notFound } from "@/lib/errors";
+import { AppError, notFound } from "@/lib/errors";
+import { plansUsing } from "../plans/plans-dal";
 import { isUuid, requireAccess, type Actor } from "../access";
 import { recordAudit } from "../audit";
 import { decodeProfile, encodeProfile } from "./profile-codec";
@@ -163,6 +164,8 @@ export async function renameRoute(db: DbOrTx, actor: Actor, routeId: string, nam
 
 export async function deleteRoute(db: DbOrTx, actor: Actor, routeId: string) {
   const { organisationId } = await guard(db, actor, routeId, "content.delete");
+  const usedBy = await plansUsing(db, { routeId });
+  if (usedBy.length) throw new AppError("conflict", `This route is used by ${usedBy.length === 1 ? "the plan" : "the plans"} ${usedBy.map((n) => `“${n}”`).join(", ")}. Remove it from ${usedBy.length === 1 ? "that plan" : "those plans"} first.`);
   await db.transaction(async (tx) => {
     const [row] = await tx.delete(routes).where(eq(routes.id, routeId)).returning({ name: routes.name });
     await recordAudit(tx, { organisationId, actorUserId: actor.userId, action: "route.deleted", targetType: "route", targetId: routeId, detail: { name: row?.name ?? null } });

@@ -22,6 +22,10 @@ const ACTION_TEXT: Record<string, string> = {
   "rig.created": "Added a rig",
   "rig.updated": "Changed a rig",
   "rig.deleted": "Deleted a rig",
+  "plan.created": "Created a plan",
+  "plan.updated": "Changed a plan",
+  "plan.deleted": "Deleted a plan",
+  "scenario.saved": "Saved a scenario",
 };
 
 function describe(detail: Row["detail"]): string {

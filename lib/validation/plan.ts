@@ -1,0 +1,27 @@
+import { z } from "zod";
+import { singleLine } from "./text";
+
+/** A plan as the API and the form send it (SI units: °C, m/s). */
+export const planInputSchema = z
+  .strictObject({
+    name: singleLine({ empty: "Name the plan.", max: 120 }),
+    routeId: z.uuid("Choose a route."),
+    tripDate: z.iso.date({ error: "Enter the date as YYYY-MM-DD." }).nullable().optional(),
+    ambientC: z.number({ error: "Enter the air temperature." }).min(-30, "Between −30 and 55 °C.").max(55, "Between −30 and 55 °C."),
+    startTempC: z.number().min(-30, "Between −30 and 300 °C.").max(300, "Between −30 and 300 °C.").nullable().optional(),
+    speedPolicy: z.enum(["standard", "cautious", "cap"], { error: "Choose a descent speed policy." }),
+    speedCapMs: z.number().min(10 / 3.6, "At least 10 km/h.").max(100 / 3.6, "At most 100 km/h.").nullable().optional(),
+    drivingStyle: z.enum(["steady", "snub"], { error: "Choose steady or snub braking." }),
+    notes: z.string().max(5000, "Notes are at most 5,000 characters.").optional(),
+    rigs: z
+      .array(z.strictObject({ rigId: z.uuid("Choose a rig."), label: singleLine({ empty: "Name the driver or participant.", max: 80 }) }))
+      .min(1, "Add at least one rig.")
+      .max(20, "A convoy has at most 20 rigs."),
+  })
+  .refine((p) => p.speedPolicy !== "cap" || (p.speedCapMs ?? null) !== null, { message: "Enter the descent speed cap.", path: ["speedCapMs"] });
+export type PlanInput = z.infer<typeof planInputSchema>;
+
+export const scenarioInputSchema = z.strictObject({
+  name: singleLine({ empty: "Name the scenario.", max: 120 }),
+  settings: z.record(z.string(), z.unknown()).refine((s) => JSON.stringify(s).length <= 20_000, "The scenario is too large."),
+});
