@@ -8,7 +8,8 @@ import { can } from "@/lib/auth/permissions";
 import { listRigs } from "@/lib/server/rigs/rigs-dal";
 import { listRoutes } from "@/lib/server/routes/routes-dal";
 import { requireWorkContext } from "@/lib/server/work-context";
-import { PlanForm, planToForm } from "../_components/plan-form";
+import { planToForm } from "@/lib/plan-form";
+import { PlanForm } from "../_components/plan-form";
 
 export const metadata: Metadata = { title: "New plan" };
 
