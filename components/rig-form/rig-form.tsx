@@ -1,7 +1,7 @@
 "use client";
 
 import { useRouter } from "next/navigation";
-import { useState } from "react";
+import { useState, type BaseSyntheticEvent } from "react";
 import { useForm } from "react-hook-form";
 import { toast } from "sonner";
 import { Button } from "@/components/ui/button";
@@ -56,7 +56,12 @@ export function RigForm({
     if (issues.length) setProblem(`${issues.length === 1 ? "One field needs" : `${issues.length} fields need`} attention: the first is “${issues[0]!.message}”`);
   };
 
-  const submit = form.handleSubmit(async (values) => {
+  // Errors set by hand (schema or server) would block handleSubmit forever: clear them first, then re-check.
+  const submit = (event?: BaseSyntheticEvent) => {
+    form.clearErrors();
+    return onValid(event);
+  };
+  const onValid = form.handleSubmit(async (values) => {
     setProblem(null);
     const parsed = savedRigInputSchema.safeParse(formToRig(values, unitSystem));
     if (!parsed.success) return showIssues(parsed.error.issues.map((i) => ({ path: ["rig", ...i.path].join(".").replace(/^rig\.(name|region)$/, "$1"), message: i.message })));

@@ -10,7 +10,7 @@ import { singleLine } from "./text";
  */
 const num = (label: string, min: number, max: number, unit: string) =>
   z
-    .number({ error: `Enter the ${label}.` })
+    .number({ error: (issue) => (issue.input === undefined || issue.input === null ? `Enter the ${label}.` : `Enter the ${label} as a number.`) })
     .refine(Number.isFinite, `Enter the ${label} as a number.`)
     .refine((v) => v >= min && v <= max, `The ${label} must be between ${min} and ${max} ${unit}.`);
 const optionalNum = (label: string, min: number, max: number, unit: string) => num(label, min, max, unit).optional();
