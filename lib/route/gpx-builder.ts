@@ -8,7 +8,6 @@ import { ProblemList } from "./problem-list";
 import { formatCount, routeError } from "./problems";
 import { type PendingPoint, type PointRules, readPoint } from "./read-point";
 
-type FieldName = "name" | "desc" | "ele" | "time";
 type Named = { name: string | null; description: string | null };
 type Frame =
   | { kind: "gpx" | "metadata" | "ignore" }
@@ -16,7 +15,17 @@ type Frame =
   | { kind: "rte"; track: GpxTrack; count: number }
   | { kind: "trkseg"; track: GpxTrack; points: GpxPoint[]; count: number }
   | { kind: "point"; pending: PendingPoint; into: GpxPoint[] | null }
-  | { kind: "field"; field: FieldName; owner: Named | PendingPoint; whose: string; text: string; line: number };
+  /** `ele` or `time` of the point in the frame below. */
+  | { kind: "ele" | "time" }
+  /** `name` or `desc` of a document, track, route or point. */
+  | { kind: "text"; field: "name" | "desc"; owner: Named; whose: string; line: number };
+
+// Frames without state are shared: a large file opens hundreds of thousands of elements.
+const GPX: Frame = { kind: "gpx" };
+const METADATA: Frame = { kind: "metadata" };
+const IGNORE: Frame = { kind: "ignore" };
+const ELE: Frame = { kind: "ele" };
+const TIME: Frame = { kind: "time" };
 
 /**
  * Turns the element and text events of {@link runSax} into a {@link GpxDocument}. Only elements in the
@@ -29,6 +38,8 @@ export class GpxBuilder implements SaxSink {
   readonly problems: ProblemList;
   readonly notes = new TimeNotes();
   private readonly stack: Frame[] = [];
+  /** Text of the open ele, time, name or desc (they have no children that are read, so never nest). */
+  private collected = "";
   private ns = "";
   private points = 0;
   private segments = 0;
@@ -44,20 +55,27 @@ export class GpxBuilder implements SaxSink {
   open(tag: SaxesTagNS, line: number): void {
     const parent = this.stack[this.stack.length - 1];
     if (parent === undefined) return this.openRoot(tag);
-    const foreign = tag.uri !== this.ns || parent.kind === "ignore" || parent.kind === "field";
-    this.stack.push(foreign ? { kind: "ignore" } : this.child(parent, tag, line));
+    const kind = parent.kind;
+    const foreign = tag.uri !== this.ns || kind === "ignore" || kind === "ele" || kind === "time" || kind === "text";
+    this.stack.push(foreign ? IGNORE : this.child(parent, tag, line));
   }
 
   text(text: string): void {
-    const top = this.stack[this.stack.length - 1];
-    if (top?.kind === "field") top.text += text;
+    const kind = this.stack[this.stack.length - 1]?.kind;
+    if (kind === "ele" || kind === "time" || kind === "text") this.collected += text;
   }
 
   close(): void {
     const frame = this.stack.pop();
-    if (frame?.kind === "field") this.closeField(frame);
-    else if (frame?.kind === "point") this.closePoint(frame.pending, frame.into);
-    else if (frame?.kind === "trk" || frame?.kind === "rte") this.notes.checkOrder(frame.track, this.problems);
+    if (frame === undefined) return;
+    if (frame.kind === "ele" || frame.kind === "time") {
+      const point = this.stack[this.stack.length - 1];
+      if (point?.kind !== "point") return; // unreachable: ele and time are only opened in a point
+      if (frame.kind === "ele") point.pending.eleText ??= this.collected;
+      else point.pending.timeText ??= this.collected;
+    } else if (frame.kind === "text") this.closeText(frame);
+    else if (frame.kind === "point") this.closePoint(frame.pending, frame.into);
+    else if (frame.kind === "trk" || frame.kind === "rte") this.notes.checkOrder(frame.track, this.problems);
   }
 
   private openRoot(tag: SaxesTagNS): void {
@@ -66,7 +84,7 @@ export class GpxBuilder implements SaxSink {
     this.ns = tag.uri;
     this.doc.version = opened.version;
     if (opened.warning !== undefined) this.problems.add(opened.warning);
-    this.stack.push({ kind: "gpx" });
+    this.stack.push(GPX);
   }
 
   private child(parent: Frame, tag: SaxesTagNS, line: number): Frame {
@@ -76,48 +94,44 @@ export class GpxBuilder implements SaxSink {
         if (local === "trk") return { kind: "trk", track: this.newTrack("track") };
         if (local === "rte") return { kind: "rte", track: this.newTrack("route"), count: 0 };
         if (local === "wpt") return this.newPoint(tag, line, null, this.waypointCount++, "waypoint");
-        if (local === "metadata") return { kind: "metadata" };
-        return this.field(local, this.doc, "document", line);
+        if (local === "metadata") return METADATA;
+        return this.textField(local, this.doc, "document", line);
       case "metadata":
-        return this.field(local, this.doc, "document", line);
+        return this.textField(local, this.doc, "document", line);
       case "trk":
         if (local === "trkseg") return this.newSegment(parent.track);
-        return this.field(local, parent.track, "track", line);
+        return this.textField(local, parent.track, "track", line);
       case "rte":
         if (local === "rtept") return this.newPoint(tag, line, parent, parent.count++, "route");
-        return this.field(local, parent.track, "route", line);
+        return this.textField(local, parent.track, "route", line);
       case "trkseg":
         if (local === "trkpt") return this.newPoint(tag, line, parent, parent.count++, "track");
-        return { kind: "ignore" };
+        return IGNORE;
       case "point":
-        return this.field(local, parent.pending, pointOwner(parent.pending), line);
+        if (local === "ele" || local === "time") {
+          this.collected = "";
+          return local === "ele" ? ELE : TIME;
+        }
+        return this.textField(local, parent.pending, pointOwner(parent.pending), line);
       default:
-        return { kind: "ignore" };
+        return IGNORE;
     }
   }
 
-  /** name/desc of the document, a track or a route; also ele/time of a point. */
-  private field(local: string, owner: Named | PendingPoint, whose: string, line: number): Frame {
-    const isPoint = "latText" in owner;
-    const ok = local === "name" || local === "desc" || (isPoint && (local === "ele" || local === "time"));
-    if (!ok) return { kind: "ignore" };
-    return { kind: "field", field: local, owner, whose, text: "", line };
+  /** name/desc of the document, a track, a route or a point. */
+  private textField(local: string, owner: Named, whose: string, line: number): Frame {
+    if (local !== "name" && local !== "desc") return IGNORE;
+    this.collected = "";
+    return { kind: "text", field: local, owner, whose, line };
   }
 
-  private closeField(f: Extract<Frame, { kind: "field" }>): void {
-    const { owner, field } = f;
-    if (field === "ele" || field === "time") {
-      const p = owner as PendingPoint;
-      if (field === "ele") p.eleText ??= f.text;
-      else p.timeText ??= f.text;
-      return;
-    }
-    const isName = field === "name";
+  private closeText(f: Extract<Frame, { kind: "text" }>): void {
+    const isName = f.field === "name";
     const max = isName ? this.limits.maxNameChars : this.limits.maxDescriptionChars;
     const what = `${f.whose} ${isName ? "name" : "description"}`;
-    const value = plainText(f.text, what, max, isName, f.line);
-    if (isName) owner.name ??= value;
-    else owner.description ??= value;
+    const value = plainText(this.collected, what, max, isName, f.line);
+    if (isName) f.owner.name ??= value;
+    else f.owner.description ??= value;
   }
 
   private newTrack(kind: "track" | "route"): GpxTrack {
@@ -185,14 +199,10 @@ export class GpxBuilder implements SaxSink {
   }
 
   private closePoint(p: PendingPoint, into: GpxPoint[] | null): void {
-    const r = readPoint(p, this.rules);
-    if (!r.ok) {
-      for (const problem of r.problems) this.problems.add(problem);
-      return;
-    }
-    this.notes.noteTime(r.timeIssue, p);
-    if (into !== null) into.push(r.point);
-    else this.doc.waypoints.push({ ...r.point, name: p.name, description: p.description });
+    const point = readPoint(p, this.rules, this.problems, this.notes);
+    if (point === null) return;
+    if (into !== null) into.push(point);
+    else this.doc.waypoints.push({ ...point, name: p.name, description: p.description });
   }
 }
 

@@ -23,8 +23,9 @@ const CHUNK_CHARS = 65_536;
 /**
  * Runs saxes 6 (a streaming, DOM-free XML 1.0 parser with namespace support) over `text` with the
  * hardening Fadeline needs (security.md §C): any DOCTYPE is refused the moment it is seen, so no entity
- * is ever declared or expanded (XXE, billion laughs, quadratic blow-up: C1–C5); nesting depth and
- * attribute counts are capped while the tag is still being read (C6, C7); the prolog is capped. Any
+ * is ever declared or expanded (XXE, billion laughs, quadratic blow-up: C1–C5); attribute counts are
+ * capped while the tag is still being read (C7) and nesting depth as soon as a tag is complete, before any
+ * of its content is read (C6); the prolog is capped. Any
  * well-formedness error (C11, C12) becomes one "not-xml" problem with its line and column, never a
  * partial result.
  *
@@ -38,18 +39,20 @@ export function runSax(text: string, sink: SaxSink, limits: GpxLimits): RoutePro
   const openLines: number[] = []; // line of each open element, for messages about unclosed elements
   let lastClosedName = "";
   let lastClosedLine = 0;
+  // Six handlers at most: saxes stores each one with a computed key, and V8 turns an object that gains too
+  // many properties that way into a slow dictionary, which made every character read ~3× slower (a seventh
+  // handler cost ~400 ms on a 100,000-point file). tests/unit/route/gpx-sax-speed.test.ts guards this.
   parser.on("doctype", () => abort(doctypeProblem(parser.line)));
-  parser.on("opentagstart", () => {
-    sawRoot = true;
-    attributes = 0;
-    depth += 1;
-    if (depth > limits.maxDepth) abort(tooDeep(parser.line, parser.column, limits.maxDepth));
-  });
   parser.on("attribute", () => {
+    sawRoot = true; // attributes only occur in tags, and the first tag is the root
     attributes += 1;
     if (attributes > limits.maxAttributes) abort(tooManyAttributes(parser.line, limits.maxAttributes));
   });
   parser.on("opentag", (tag) => {
+    sawRoot = true;
+    attributes = 0; // counted afresh for the next tag
+    depth += 1;
+    if (depth > limits.maxDepth) abort(tooDeep(parser.line, parser.column, limits.maxDepth));
     if (!tag.isSelfClosing) openLines.push(parser.line);
     sink.open(tag, parser.line);
   });

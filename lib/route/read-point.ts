@@ -1,5 +1,5 @@
 import type { GpxPoint } from "./gpx-types";
-import { parseDecimal } from "./parse-decimal";
+import { decimalError, decimalValue } from "./parse-decimal";
 import { parseGpxTime } from "./parse-time";
 import { type ProblemLocation, type RouteProblem, routeError } from "./problems";
 
@@ -47,10 +47,15 @@ export interface PointRules {
   maxElevationM: number;
 }
 
-/** Result of {@link readPoint}. */
-export type ReadPointResult =
-  | { ok: true; point: GpxPoint; timeIssue: "invalid" | "no-zone" | null }
-  | { ok: false; problems: RouteProblem[] };
+/** Where {@link readPoint} reports bad values (a ProblemList). */
+export interface ProblemSink {
+  add(problem: RouteProblem): void;
+}
+
+/** Where {@link readPoint} reports unreadable or zone-less times of valid points (TimeNotes). */
+export interface TimeSink {
+  noteTime(issue: "invalid" | "no-zone" | null, p: PendingPoint): void;
+}
 
 const REASON = {
   empty: "is empty",
@@ -62,15 +67,17 @@ const REASON = {
  * Validates one point: latitude in [−90, 90] and longitude in [−180, 180] (GPX 1.1 latitudeType and
  * longitudeType; lon = 180, the same meridian as −180, is accepted unless `rejectLongitude180`),
  * elevation within the believable range, all as strict xsd:decimal. Times never make a point invalid.
+ * Called once per point, so nothing is allocated on the way but the point itself.
  *
- * @returns the point, or one problem per bad value
+ * @param problems receives one problem per bad value, in the order latitude, longitude, elevation
+ * @param times receives the time issue of a valid point (`null` when its time is fine or absent)
+ * @returns the point, or `null` when a value is bad
  */
-export function readPoint(p: PendingPoint, rules: PointRules): ReadPointResult {
-  const problems: RouteProblem[] = [];
+export function readPoint(p: PendingPoint, rules: PointRules, problems: ProblemSink, times: TimeSink): GpxPoint | null {
   const lat = coordinate(p, "latitude", p.latText, 90, false, rules, problems);
   const lon = coordinate(p, "longitude", p.lonText, 180, rules.rejectLongitude180, rules, problems);
   const eleM = elevation(p, rules, problems);
-  if (lat === null || lon === null || eleM === undefined) return { ok: false, problems };
+  if (lat === null || lon === null || eleM === undefined) return null;
   let timeS: number | null = null;
   let timeIssue: "invalid" | "no-zone" | null = null;
   if (p.timeText !== undefined) {
@@ -80,7 +87,8 @@ export function readPoint(p: PendingPoint, rules: PointRules): ReadPointResult {
       if (!t.hasZone) timeIssue = "no-zone";
     } else timeIssue = "invalid";
   }
-  return { ok: true, point: { lat, lon, eleM, timeS, line: p.line }, timeIssue };
+  times.noteTime(timeIssue, p);
+  return { lat, lon, eleM, timeS, line: p.line };
 }
 
 function coordinate(
@@ -90,48 +98,53 @@ function coordinate(
   limit: number,
   maxExclusive: boolean,
   rules: PointRules,
-  problems: RouteProblem[],
+  problems: ProblemSink,
 ): number | null {
   if (text === undefined) {
-    problems.push(routeError("missing-coordinate", `${pointLabel(p)}: the ${what} attribute is missing.`, pointWhere(p)));
+    problems.add(routeError("missing-coordinate", `${pointLabel(p)}: the ${what} attribute is missing.`, pointWhere(p)));
     return null;
   }
-  const r = parseDecimal(text, rules.maxValueChars);
-  if (!r.ok) {
-    problems.push(routeError("invalid-number", `${pointLabel(p)}: ${what} ${quote(text)} ${REASON[r.reason]}.`, pointWhere(p)));
+  const value = decimalValue(text, rules.maxValueChars);
+  if (Number.isNaN(value)) {
+    problems.add(routeError("invalid-number", `${pointLabel(p)}: ${what} ${quote(text)} ${reason(text, rules)}.`, pointWhere(p)));
     return null;
   }
-  if (r.value < -limit || r.value > limit || (maxExclusive && r.value === limit)) {
+  if (value < -limit || value > limit || (maxExclusive && value === limit)) {
     const range = `−${limit} to ${maxExclusive ? "below " : ""}${limit}`;
     const code = what === "latitude" ? "latitude-out-of-range" : "longitude-out-of-range";
-    problems.push(routeError(code, `${pointLabel(p)}: ${what} ${r.value} is outside ${range} degrees.`, pointWhere(p)));
+    problems.add(routeError(code, `${pointLabel(p)}: ${what} ${value} is outside ${range} degrees.`, pointWhere(p)));
     return null;
   }
-  return r.value;
+  return value;
 }
 
 /** Elevation in m, `null` when absent, `undefined` when invalid (a problem was added). */
-function elevation(p: PendingPoint, rules: PointRules, problems: RouteProblem[]): number | null | undefined {
+function elevation(p: PendingPoint, rules: PointRules, problems: ProblemSink): number | null | undefined {
   if (p.eleText === undefined) return null;
-  const r = parseDecimal(p.eleText, rules.maxValueChars);
-  if (!r.ok) {
-    problems.push(
-      routeError("invalid-number", `${pointLabel(p)}: elevation ${quote(p.eleText)} ${REASON[r.reason]}.`, pointWhere(p)),
+  const value = decimalValue(p.eleText, rules.maxValueChars);
+  if (Number.isNaN(value)) {
+    problems.add(
+      routeError("invalid-number", `${pointLabel(p)}: elevation ${quote(p.eleText)} ${reason(p.eleText, rules)}.`, pointWhere(p)),
     );
     return undefined;
   }
-  if (r.value < rules.minElevationM || r.value > rules.maxElevationM) {
-    problems.push(
+  if (value < rules.minElevationM || value > rules.maxElevationM) {
+    problems.add(
       routeError(
         "elevation-out-of-range",
-        `${pointLabel(p)}: elevation ${r.value} m is outside the believable range ` +
+        `${pointLabel(p)}: elevation ${value} m is outside the believable range ` +
           `${rules.minElevationM} to ${rules.maxElevationM} m.`,
         pointWhere(p),
       ),
     );
     return undefined;
   }
-  return r.value;
+  return value;
+}
+
+/** Why a value that {@link decimalValue} refused is not a number, for the message. */
+function reason(text: string, rules: PointRules): string {
+  return REASON[decimalError(text, rules.maxValueChars) ?? "syntax"];
 }
 
 /** Quotes a value for a message, shortened so a hostile value cannot flood the message. */

@@ -39,9 +39,10 @@ const EARTH_RADIUS_M = 6_371_008.8; // IUGG mean radius; only used to project fo
 
 /**
  * Builds the browser's view of a route. The map line is simplified with the Ramer–Douglas–Peucker algorithm
- * (Douglas & Peucker 1973) on a local equirectangular projection, per segment, the tolerance doubling from
- * 2 m until the line fits `maxLinePoints`; descent ends and segment ends are always kept. The profile keeps
- * the lowest and highest sample of each of `maxProfilePoints / 2` equal buckets, so no peak is lost.
+ * (Douglas & Peucker 1973) on a local equirectangular projection, between kept vertices (route ends, descent
+ * ends, both sides of every segment gap), with the smallest tolerance of at least 2 m at which the line fits
+ * `maxLinePoints`: every dropped sample lies within that tolerance of the drawn line. The profile keeps the
+ * lowest and highest sample of each of `maxProfilePoints / 2` equal buckets, so no peak is lost.
  *
  * @param profile the full profile, SI units
  * @param descents descents found on it
@@ -59,10 +60,11 @@ export function buildRouteView(
 ): RouteView {
   const n = profile.distanceM.length;
   if (n < 2) throw new RangeError("profile needs at least two samples");
-  const keep = new Set<number>([0, n - 1]);
-  for (const d of descents) keep.add(d.startIndex).add(d.endIndex);
-  for (let i = 0; i < n - 1; i++) if (profile.gapAfter[i]) keep.add(i).add(i + 1);
-  const lineIdx = simplifyToFit(profile, keep, options.maxLinePoints ?? 4000);
+  const anchors = new Uint8Array(n);
+  anchors[0] = anchors[n - 1] = 1;
+  for (const d of descents) anchors[d.startIndex] = anchors[d.endIndex] = 1;
+  for (let i = 0; i < n - 1; i++) if (profile.gapAfter[i]) anchors[i] = anchors[i + 1] = 1;
+  const lineIdx = simplifyToFit(profile, anchors, options.maxLinePoints ?? 4000);
   const profileIdx = bucketExtremes(profile.elevationM, Math.max(2, Math.floor((options.maxProfilePoints ?? 1500) / 2)));
   return {
     line: lineFrom(profile, lineIdx),
@@ -102,44 +104,106 @@ function hasGap(p: RouteProfile, from: number, to: number): boolean {
   return false;
 }
 
-function simplifyToFit(p: RouteProfile, keep: Set<number>, max: number): number[] {
-  const lat0 = (p.lat[0]! * Math.PI) / 180;
-  const x = Float64Array.from(p.lon, (lon) => ((lon * Math.PI) / 180) * Math.cos(lat0) * EARTH_RADIUS_M);
-  const y = Float64Array.from(p.lat, (lat) => ((lat * Math.PI) / 180) * EARTH_RADIUS_M);
-  for (let tolerance = 2; ; tolerance *= 2) {
-    const marked = new Uint8Array(p.lat.length);
-    for (const i of keep) marked[i] = 1;
-    const anchors = [...keep].sort((a, b) => a - b);
-    for (let k = 0; k < anchors.length - 1; k++) douglasPeucker(x, y, anchors[k]!, anchors[k + 1]!, tolerance, marked);
-    const idx: number[] = [];
-    for (let i = 0; i < marked.length; i++) if (marked[i]) idx.push(i);
-    if (idx.length <= max || tolerance > 1e6) return idx;
+/** Smallest simplification tolerance, m: finer wiggles are GPS noise at any map zoom. */
+const MIN_TOLERANCE_M = 2;
+
+/** Indices of the simplified line: the anchors and every vertex more significant than the chosen tolerance. */
+function simplifyToFit(p: RouteProfile, anchors: Uint8Array, max: number): number[] {
+  const n = p.lat.length;
+  const cosLat0 = Math.cos((p.lat[0]! * Math.PI) / 180);
+  const x = new Float64Array(n);
+  const y = new Float64Array(n);
+  for (let i = 0; i < n; i++) {
+    x[i] = ((p.lon[i]! * Math.PI) / 180) * cosLat0 * EARTH_RADIUS_M;
+    y[i] = ((p.lat[i]! * Math.PI) / 180) * EARTH_RADIUS_M;
   }
+  const sig = significance(x, y, anchors, MIN_TOLERANCE_M);
+  const tolerance = fittingTolerance(sig, anchors, max);
+  const idx: number[] = [];
+  for (let i = 0; i < n; i++) if (anchors[i] || sig[i]! > tolerance) idx.push(i);
+  return idx;
 }
 
-/** Iterative Ramer–Douglas–Peucker between two kept vertices, marking the vertices to keep. */
-function douglasPeucker(x: Float64Array, y: Float64Array, first: number, last: number, tol: number, marked: Uint8Array) {
-  const stack: [number, number][] = [[first, last]];
-  while (stack.length) {
-    const [a, b] = stack.pop()!;
-    let worst = -1;
-    let worstD = tol;
-    const dx = x[b]! - x[a]!;
-    const dy = y[b]! - y[a]!;
+/**
+ * Each vertex's Ramer–Douglas–Peucker significance, found in one pass: the recursion splits every span at
+ * its farthest vertex (the first, on a tie) down to `floorM`, and records that distance, clamped to the
+ * significance of the split that made the span. RDP with any tolerance t ≥ `floorM` then keeps exactly the
+ * vertices whose significance exceeds t, because a vertex is kept iff it and every split above it stand
+ * more than t off their chords. Vertices never split off get 0; anchors get Infinity.
+ */
+function significance(x: Float64Array, y: Float64Array, anchors: Uint8Array, floorM: number): Float64Array {
+  const n = x.length;
+  const sig = new Float64Array(n);
+  const spans = new Int32Array(2 * n); // pending spans as (first, last) pairs
+  const caps = new Float64Array(n); // significance of the split that made each pending span
+  let top = 0;
+  for (let a = -1, i = 0; i < n; i++) {
+    if (!anchors[i]) continue;
+    sig[i] = Infinity;
+    if (a >= 0 && i - a > 1) {
+      spans[2 * top] = a;
+      spans[2 * top + 1] = i;
+      caps[top++] = Infinity;
+    }
+    a = i;
+  }
+  const floor2 = floorM * floorM;
+  while (top > 0) {
+    top--;
+    const a = spans[2 * top]!;
+    const b = spans[2 * top + 1]!;
+    const cap = caps[top]!;
+    const ax = x[a]!;
+    const ay = y[a]!;
+    const dx = x[b]! - ax;
+    const dy = y[b]! - ay;
     const len2 = dx * dx + dy * dy;
+    let worst = -1;
+    let worst2 = floor2;
     for (let i = a + 1; i < b; i++) {
-      const t = len2 > 0 ? Math.max(0, Math.min(1, ((x[i]! - x[a]!) * dx + (y[i]! - y[a]!) * dy) / len2)) : 0;
-      const d = Math.hypot(x[i]! - x[a]! - t * dx, y[i]! - y[a]! - t * dy);
-      if (d > worstD) {
-        worstD = d;
+      const px = x[i]! - ax;
+      const py = y[i]! - ay;
+      const t = len2 > 0 ? Math.max(0, Math.min(1, (px * dx + py * dy) / len2)) : 0;
+      const ex = px - t * dx;
+      const ey = py - t * dy;
+      const d2 = ex * ex + ey * ey;
+      if (d2 > worst2) {
+        worst2 = d2;
         worst = i;
       }
     }
-    if (worst >= 0) {
-      marked[worst] = 1;
-      stack.push([a, worst], [worst, b]);
+    if (worst < 0) continue;
+    const s = Math.min(Math.sqrt(worst2), cap);
+    sig[worst] = s;
+    if (worst - a > 1) {
+      spans[2 * top] = a;
+      spans[2 * top + 1] = worst;
+      caps[top++] = s;
+    }
+    if (b - worst > 1) {
+      spans[2 * top] = worst;
+      spans[2 * top + 1] = b;
+      caps[top++] = s;
     }
   }
+  return sig;
+}
+
+/** The smallest tolerance ≥ {@link MIN_TOLERANCE_M} that leaves at most `max` vertices (anchors always stay). */
+function fittingTolerance(sig: Float64Array, anchors: Uint8Array, max: number): number {
+  let anchorCount = 0;
+  let candidates = 0;
+  for (let i = 0; i < sig.length; i++) {
+    if (anchors[i]) anchorCount++;
+    else if (sig[i]! > MIN_TOLERANCE_M) candidates++;
+  }
+  const budget = max - anchorCount;
+  if (candidates <= budget) return MIN_TOLERANCE_M;
+  if (budget <= 0) return Infinity;
+  const values = new Float64Array(candidates);
+  for (let i = 0, k = 0; i < sig.length; i++) if (!anchors[i] && sig[i]! > MIN_TOLERANCE_M) values[k++] = sig[i]!;
+  values.sort();
+  return values[candidates - budget - 1]!; // keeps those above it: at most `budget`, fewer on a tie
 }
 
 /** Indices of the lowest and highest value in each of `buckets` equal runs, in order. */

@@ -1,18 +1,20 @@
 /**
  * lib/route benchmarks (vitest bench): the hot path resample + smooth + grade/curve + descents + stats on
- * a synthetic 300 km route, each stage alone, and parsing / processing a 100,000-point GPX file (≈ 9 MB,
- * the size issue 3 §6 budgets for). Synthetic data only: an invented winding mountain road with seeded
+ * a synthetic 300 km route, each stage alone, and parsing / processing a 100,000-point GPX file (≈ 7 MB,
+ * the size issue 3 §6 budgets for) through to the browser's view, as the upload worker does. Synthetic data only: an invented winding mountain road with seeded
  * GPS-like noise. Run: npx vitest bench --run tests/bench/route.bench.ts
  */
 import { bench, describe } from "vitest";
 import {
   buildRouteProfile,
+  buildRouteView,
   type CleanTrack,
   cleanTrack,
   computeRouteStats,
   findDescents,
   type GpxPoint,
   parseGpx,
+  placeWaypoints,
   processGpx,
   resampleTrack,
   smoothElevation,
@@ -64,11 +66,19 @@ describe("300 km route, 10 m step", () => {
   });
 });
 
-describe("100,000-point GPX (≈ 9 MB)", () => {
+const processed100k = processGpx(gpx100k);
+if (!processed100k.ok) throw new Error("process failed");
+
+describe("100,000-point GPX (≈ 7 MB)", () => {
   bench("parseGpx", () => {
     if (!parseGpx(gpx100k).ok) throw new Error("parse failed");
   }, { iterations: 5, time: 0 });
   bench("processGpx (parse → clean → profile → descents → stats)", () => {
     if (!processGpx(gpx100k).ok) throw new Error("process failed");
   }, { iterations: 5, time: 0 });
+  bench("buildRouteView + placeWaypoints (one-pass RDP to 4000 vertices)", () => {
+    const { profile, descents, stats, gpx } = processed100k;
+    buildRouteView(profile, descents, stats);
+    placeWaypoints(profile, gpx.waypoints);
+  }, { iterations: 10, time: 0 });
 });
