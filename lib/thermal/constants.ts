@@ -4,8 +4,16 @@
  * standard, not re-checked), [D] derived from plain physics, [E] an engineering estimate (a default, not a fact).
  */
 
-/** Version of the brake-heat model. Bump it whenever an equation or a default changes. */
-export const MODEL_VERSION = "fadeline-thermal 1.0.0";
+/**
+ * Version of the brake-heat model. Bump it whenever an equation or a default changes.
+ *
+ * Changelog:
+ * - 1.1.0: stretch controls (HeatRunOptions.controls, range-controls.ts): a held-speed cap and a held gear
+ *   (converter locked) on one stretch of the route, so advice is re-run on one descent only. Runs without
+ *   controls give the same numbers as 1.0.0.
+ * - 1.0.0: first model (issue 4).
+ */
+export const MODEL_VERSION = "fadeline-thermal 1.1.0";
 
 /** Standard gravity, m/s². Exact by definition (CGPM 1901; ISO 80000-3). */
 export const STANDARD_GRAVITY = 9.80665;

@@ -10,6 +10,7 @@ import { integrateHeatRun } from "./integrate";
 import { rigMasses } from "./masses";
 import type { ModelParamsInput } from "./params";
 import { prepareRoute, type PreparedRoute } from "./prepare-route";
+import { controlColumns, type RangeControl } from "./range-controls";
 import { resolveModel, type BrakePositionSpec, type ResolvedModel } from "./resolve";
 import type { Rig } from "./rig";
 import type { ThermalState } from "./standstill";
@@ -32,6 +33,8 @@ export interface HeatRunOptions {
   params?: ModelParamsInput;
   /** Cool-down stops. */
   stops?: readonly CoolDownStop[];
+  /** Driving instructions on stretches of the route: a held-speed cap, a held gear (model 1.1.0). */
+  controls?: readonly RangeControl[];
   /** Starting state instead of the start temperature (aligned with the rig's positions: front, rear, trailer). */
   startState?: ThermalState;
 }
@@ -105,7 +108,8 @@ export function runPrepared(route: PreparedRoute, rig: Rig, options: HeatRunOpti
   if (start.rotorC.length !== model.positions.length || start.fluidC.length !== model.positions.length) {
     throw new RangeError("options.startState must have one entry per brake position");
   }
-  const { trace, finalState } = integrateHeatRun(route, model, stopS, start);
+  const controls = controlColumns(route, model, options.controls);
+  const { trace, finalState } = integrateHeatRun(route, model, stopS, start, controls);
   const notes = [
     `Brake thresholds: ${PAD_THRESHOLD_LABEL}.`,
     `Fluid temperatures: ${FLUID_PROXY_LABEL}.`,

@@ -9,6 +9,7 @@ import { engineBrakingWheelPowerW, engineRpm } from "./engine";
 import { exactStepC } from "./exact-step";
 import { splitRetardingWork } from "./partition";
 import type { PreparedRoute } from "./prepare-route";
+import type { ControlColumns } from "./range-controls";
 import type { BrakePositionSpec, ResolvedModel } from "./resolve";
 import { heldSpeeds } from "./speed-profile";
 import { standstillSubsteps, type ThermalState } from "./standstill";
@@ -36,6 +37,7 @@ const MIN_MEAN_SPEED_MS = 0.1;
  * @param model resolved model
  * @param stopS stop duration at each sample, s
  * @param start starting state (aligned with model.positions)
+ * @param controls columns of the stretch controls (held speed caps, held gears), or null (default)
  * @returns the trace and the state at the end
  * @example integrateHeatRun(route, model, new Float64Array(route.n), start)
  */
@@ -44,12 +46,16 @@ export function integrateHeatRun(
   model: ResolvedModel,
   stopS: Float64Array,
   start: ThermalState,
+  controls: ControlColumns | null = null,
 ): { trace: HeatTrace; finalState: ThermalState } {
   const { params, positions } = model;
   const P = positions.length;
   const n = route.n;
   const trace = allocateTrace(route.profile, P);
-  const speed = heldSpeeds(route, model, stopS);
+  const speed = heldSpeeds(route, model, stopS, controls);
+  const heldGear = controls === null ? null : controls.gear;
+  const engineFactor = model.engineFactor;
+  const lockedFactor = model.lockedEngineFactor;
   trace.speedMs.set(speed);
   trace.stopS.set(stopS);
   const ta = params.ambientC;
@@ -109,13 +115,15 @@ export function integrateHeatRun(
     const eRoll = crrMg * (route.runM[i] as number);
     const surplus = ePot + eKin - eAero - eRoll;
     let g = G - 1;
-    if (fixedGear >= 0 && -(grade[i] as number) >= gentlest) g = fixedGear;
+    const held = heldGear === null ? 0 : (heldGear[i] as number);
+    if (held > 0) g = held - 1;
+    else if (fixedGear >= 0 && -(grade[i] as number) >= gentlest) g = fixedGear;
     else for (let q = 0; q < G; q++) if (vm <= (vAtMax[q] as number)) { g = q; break; }
     if (surplus > 0) {
       trace.gear[k] = g + 1;
       const avail = fixedW !== null ? fixedW * dt
         : wheelPower(rpmOf(vm, ratios[g] ?? 1, model.tyreDiameterM), model.displacementM3,
-          model.engineFactor, params.drivelineEfficiency, model.idleRpm) * dt;
+          held > 0 ? lockedFactor : engineFactor, params.drivelineEfficiency, model.idleRpm) * dt;
       splitWork(split, surplus, avail, model.trailerBrakeType, model.trailerMassShare, gain, frontShare);
     } else {
       split.fill(0);

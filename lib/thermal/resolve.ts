@@ -100,6 +100,11 @@ export interface ResolvedModel {
   idleRpm: number;
   /** Exhaust-brake × converter × user multiplier on motoring power (dimensionless). */
   engineFactor: number;
+  /**
+   * The same multiplier with the converter locked (a gear held in manual mode; range-controls.ts): exhaust-brake
+   * × user multiplier (dimensionless). Equals {@link engineFactor} for a manual or an already locked automatic.
+   */
+  lockedEngineFactor: number;
   /** Braked positions: front, rear, and trailer when it has brakes. */
   positions: BrakePositionSpec[];
 }
@@ -128,10 +133,9 @@ export function resolveModel(rig: Rig, input: ModelParamsInput = {}): ResolvedMo
     maxRpm: merged.maxRpm ?? vehicle.engine.maxRpm ?? DEFAULT_MAX_RPM[vehicle.engine.fuel],
   };
   const unlocked = transmission.kind === "automatic" && transmission.converterLocked !== true;
-  const engineFactor =
-    params.engineBrakingScale *
-    (vehicle.engine.brakeMode === "exhaust-brake" ? params.exhaustBrakeFactor : 1) *
-    (unlocked ? params.converterUnlockedFactor : 1);
+  const lockedEngineFactor =
+    params.engineBrakingScale * (vehicle.engine.brakeMode === "exhaust-brake" ? params.exhaustBrakeFactor : 1);
+  const engineFactor = lockedEngineFactor * (unlocked ? params.converterUnlockedFactor : 1);
   const positions: BrakePositionSpec[] = [
     positionSpec("front", 2, vehicle.frontBrakes, vehicle.padFamily, vehicle.brakeFluid, params),
     positionSpec("rear", 2, vehicle.rearBrakes, vehicle.padFamily, vehicle.brakeFluid, params),
@@ -156,6 +160,7 @@ export function resolveModel(rig: Rig, input: ModelParamsInput = {}): ResolvedMo
     displacementM3: vehicle.engine.displacementM3,
     idleRpm: vehicle.engine.idleRpm ?? DEFAULT_IDLE_RPM,
     engineFactor,
+    lockedEngineFactor,
     positions,
   };
 }

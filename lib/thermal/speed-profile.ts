@@ -1,6 +1,7 @@
 /**
  * The speed the driver holds at each sample: the lowest of the cruise cap, the towing speed limit, the curve
- * speed √(a_lat·R), the descent speed policy, a fixed descent gear's rpm limit, and 0 at a cool-down stop; then
+ * speed √(a_lat·R), the descent speed policy, a fixed descent gear's rpm limit, the caps of any stretch controls
+ * (range-controls.ts), and 0 at a cool-down stop; then
  * a forward pass (acceleration limit) and a backward pass (deceleration limit), v² changing by at most 2·a·Δs per
  * step. On constant-speed stretches there is no kinetic term, as in the FHWA grade severity rating system's
  * constant descent speed (thermal-model.md §1.2).
@@ -8,6 +9,7 @@
 
 import { engineRpm } from "./engine";
 import type { PreparedRoute } from "./prepare-route";
+import type { ControlColumns } from "./range-controls";
 import type { ResolvedModel } from "./resolve";
 
 /**
@@ -30,10 +32,16 @@ export function isDescentStep(grade: number, model: ResolvedModel): boolean {
  * @param route prepared route
  * @param model resolved model
  * @param stopS stop duration at each sample, s (> 0 marks a cool-down stop)
+ * @param controls columns of the run's stretch controls, or null (default)
  * @returns target speed per sample, m/s
  * @example targetSpeeds(route, model, new Float64Array(route.n))
  */
-export function targetSpeeds(route: PreparedRoute, model: ResolvedModel, stopS: Float64Array): Float64Array {
+export function targetSpeeds(
+  route: PreparedRoute,
+  model: ResolvedModel,
+  stopS: Float64Array,
+  controls: ControlColumns | null = null,
+): Float64Array {
   const { params } = model;
   const n = route.n;
   const out = new Float64Array(n);
@@ -44,6 +52,7 @@ export function targetSpeeds(route: PreparedRoute, model: ResolvedModel, stopS: 
     params.gearPolicy.kind === "fixed" ? fixedGearSpeedLimit(model, params.gearPolicy.gear) : Infinity;
   const radius = route.profile.curveRadiusM;
   const grade = route.profile.grade;
+  const controlCap = controls === null ? null : controls.speedCapMs;
   for (let i = 0; i < n; i++) {
     let v = cap;
     const curve = Math.sqrt(params.lateralAccelMs2 * (radius[i] as number));
@@ -58,6 +67,7 @@ export function targetSpeeds(route: PreparedRoute, model: ResolvedModel, stopS: 
       }
     }
     if (descent && fixedGearCap < v) v = fixedGearCap;
+    if (controlCap !== null && (controlCap[i] as number) < v) v = controlCap[i] as number;
     if ((stopS[i] as number) > 0) v = 0;
     out[i] = v;
   }
@@ -70,12 +80,18 @@ export function targetSpeeds(route: PreparedRoute, model: ResolvedModel, stopS: 
  * @param route prepared route
  * @param model resolved model
  * @param stopS stop duration at each sample, s
+ * @param controls columns of the run's stretch controls, or null (default)
  * @returns held speed per sample, m/s
  * @example heldSpeeds(route, model, new Float64Array(route.n))
  */
-export function heldSpeeds(route: PreparedRoute, model: ResolvedModel, stopS: Float64Array): Float64Array {
+export function heldSpeeds(
+  route: PreparedRoute,
+  model: ResolvedModel,
+  stopS: Float64Array,
+  controls: ControlColumns | null = null,
+): Float64Array {
   const { params } = model;
-  const v = targetSpeeds(route, model, stopS);
+  const v = targetSpeeds(route, model, stopS, controls);
   const n = route.n;
   const gap = route.profile.gapAfter;
   const twoA = 2 * params.accelMs2;

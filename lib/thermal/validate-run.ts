@@ -70,6 +70,7 @@ export function validateHeatRunOptions(options: unknown, rig: Rig): HeatRunOptio
       requireNonNegative(stop.durationS, `options.stops[${i}].durationS`);
     });
   }
+  if (o.controls !== undefined) validateControls(o.controls, rig);
   if (o.startState !== undefined) {
     const s = requireObject(o.startState, "options.startState");
     if (!Array.isArray(s.rotorC) || !Array.isArray(s.fluidC)) {
@@ -78,6 +79,21 @@ export function validateHeatRunOptions(options: unknown, rig: Rig): HeatRunOptio
     s.rotorC.forEach((t: unknown, i: number) => requireBetween(t, `options.startState.rotorC[${i}]`, -60, 1200));
   }
   return options as HeatRunOptions;
+}
+
+/** @private Stretch controls: a finite stretch, a positive speed cap, a gear of the rig's transmission. */
+function validateControls(controls: unknown, rig: Rig): void {
+  if (!Array.isArray(controls)) throw new TypeError("options.controls must be an array");
+  controls.forEach((c: unknown, i: number) => {
+    const name = `options.controls[${i}]`;
+    const control = requireObject(c, name);
+    const startM = requireFinite(control.startM, `${name}.startM`);
+    if (requireFinite(control.endM, `${name}.endM`) <= startM) {
+      throw new RangeError(`${name}.endM must be greater than ${name}.startM`);
+    }
+    if (control.speedMs !== undefined) requirePositive(control.speedMs, `${name}.speedMs`);
+    if (control.gear !== undefined) requireInteger(control.gear, `${name}.gear`, 1, gearCount(rig));
+  });
 }
 
 /** @private Ranges of the numeric parameters: [min, max] (inclusive). */

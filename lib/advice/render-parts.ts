@@ -1,0 +1,107 @@
+/**
+ * Words and numbers for the advice text: positions, classes, ordinals, speeds rounded down in the user's unit,
+ * outcomes ("front 240 °C, rear 210 °C: caution"). Numbers come in SI and go out through lib/units.
+ */
+
+import type { StepClass } from "@/lib/thermal";
+import { formatDistance, formatElevation, formatSpeed, formatTemperature, M_PER_MI, type UnitSystem } from "@/lib/units";
+import type { PlannedStop, RunOutcome, StopPlace } from "./types";
+
+/** The step classes in the words of the plan page (issue 5 §3). */
+export const CLASS_WORDS: Readonly<Record<StepClass, string>> = {
+  cool: "below caution",
+  warm: "caution",
+  hot: "fade likely",
+  "boil-risk": "brake-fluid boil risk",
+};
+
+/**
+ * An ordinal gear name.
+ * @param n gear, 1-based
+ * @returns "1st", "2nd", "3rd", "4th", … "11th", "12th", "13th", "21st"
+ * @example ordinal(2) // "2nd"
+ */
+export function ordinal(n: number): string {
+  const tens = n % 100;
+  const suffix = tens >= 11 && tens <= 13 ? "th" : n % 10 === 1 ? "st" : n % 10 === 2 ? "nd" : n % 10 === 3 ? "rd" : "th";
+  return `${n}${suffix}`;
+}
+
+/**
+ * A speed limit in the user's unit, rounded DOWN to a whole km/h or mph (never faster than advised).
+ * @param ms speed, m/s
+ * @param system unit system
+ * @returns e.g. "45 km/h", "27 mph"
+ * @example speedLimitText(45 / 3.6, "imperial") // "27 mph"
+ */
+export function speedLimitText(ms: number, system: UnitSystem): string {
+  const perUnit = system === "metric" ? 1 / 3.6 : M_PER_MI / 3600;
+  return formatSpeed(Math.floor(ms / perUnit + 1e-6) * perUnit, system);
+}
+
+/**
+ * A place along the route: "12.3 km".
+ * @param m distance along the route, m
+ * @param system unit system
+ * @returns text
+ * @example at(7800, "metric") // "7.8 km"
+ */
+export function at(m: number, system: UnitSystem): string {
+  return formatDistance(m, system);
+}
+
+/**
+ * A duration in whole minutes.
+ * @param s duration, s
+ * @returns e.g. "10 minutes", "1 minute"
+ * @example minutesText(600) // "10 minutes"
+ */
+export function minutesText(s: number): string {
+  const n = Math.round(s / 60);
+  return `${n} minute${n === 1 ? "" : "s"}`;
+}
+
+/**
+ * An outcome in words: every position's peak and the worst class.
+ * @param outcome a run's outcome
+ * @param system unit system
+ * @param trailerNoun word for the trailer ("caravan", "trailer")
+ * @returns e.g. "front 240 °C, rear 210 °C, caravan 180 °C: below caution"
+ * @example outcomeText(outcome, "metric", "caravan")
+ */
+export function outcomeText(outcome: RunOutcome, system: UnitSystem, trailerNoun: string): string {
+  const peaks = outcome.positions
+    .map((p) => `${p.position === "trailer" ? trailerNoun : p.position} ${formatTemperature(p.peakC, system)}`)
+    .join(", ");
+  return `${peaks}: ${CLASS_WORDS[outcome.worstClass]}`;
+}
+
+/**
+ * Where a stop is, in words.
+ * @param stop the stop
+ * @param system unit system
+ * @returns e.g. "at Fernhollow Camp (35.6 km)", "at the crest (31.6 km)", "at 32.7 km, where the road levels out (2 % down)"
+ * @example stopPlaceText(stop, "metric")
+ */
+export function stopPlaceText(stop: PlannedStop, system: UnitSystem): string {
+  const where = at(stop.atM, system);
+  const place: StopPlace = stop.place;
+  if (place.kind === "waypoint") return `at ${place.name} (${where})`;
+  if (place.kind === "crest") return `at the crest (${where})`;
+  const pct = Math.abs(place.grade * 100);
+  if (pct < 1) return `at ${where}, where the road is nearly level`;
+  const slope = `${pct.toFixed(0)} % ${place.grade < 0 ? "down" : "up"}`;
+  if (pct < 3) return `at ${where}, where the road levels out (${slope})`;
+  return `at ${where} (${slope}, the flattest there: choose a safe place to pull off nearby)`;
+}
+
+/**
+ * A stopping distance in the user's length unit.
+ * @param m distance, m
+ * @param system unit system
+ * @returns e.g. "57 m", "187 ft"
+ * @example lengthText(57, "metric") // "57 m"
+ */
+export function lengthText(m: number, system: UnitSystem): string {
+  return formatElevation(m, system);
+}

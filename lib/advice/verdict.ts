@@ -1,0 +1,40 @@
+/**
+ * Verdicts in our words, for one rig and for a convoy (judged by its weakest rig). The rule:
+ * - "clear": no descent takes any brake to the warm (caution) line or the fluid to boil risk, as planned;
+ * - "not advised": on some descent nothing is enough (even 1st gear at walking pace with the converter locked
+ *   leaves a brake at or above the hot line or the fluid at boil risk), or the proven combined plan still does;
+ * - "clear with advice": otherwise: every descent that needs advice has a combined plan whose whole-route
+ *   re-run keeps every brake below the hot (fade-likely) line and the fluid below boil risk. A plan may leave
+ *   a brake in the warm band; that is said plainly in the advice ("caution"), but it is not a reason to refuse.
+ */
+
+import type { DescentAdvice, Verdict } from "./types";
+
+/** Verdicts from best to worst. */
+export const VERDICTS: readonly Verdict[] = ["clear", "clear with advice", "not advised"];
+
+/**
+ * A rig's verdict from its descent advice.
+ * @param advice advice for every descent that needs it
+ * @param reachedWarm whether any descent reached warm or worse as planned (default: some advice exists); a
+ *   descent can need no advice of its own once the plans before it have cooled the brakes
+ * @returns the verdict
+ * @example rigVerdict([]) // "clear"
+ */
+export function rigVerdict(advice: readonly DescentAdvice[], reachedWarm = advice.length > 0): Verdict {
+  if (!reachedWarm) return "clear";
+  const fails = advice.some((a) => a.nothingIsEnough || a.plan.status === "above-hot");
+  return fails ? "not advised" : "clear with advice";
+}
+
+/**
+ * The worst of several verdicts (the weakest rig decides).
+ * @param verdicts verdicts
+ * @returns the worst ("clear" for none)
+ * @example worstVerdict(["clear", "not advised"]) // "not advised"
+ */
+export function worstVerdict(verdicts: readonly Verdict[]): Verdict {
+  let worst = 0;
+  for (const v of verdicts) worst = Math.max(worst, VERDICTS.indexOf(v));
+  return VERDICTS[worst] ?? "clear";
+}

@@ -1,0 +1,65 @@
+/**
+ * Synthetic routes and rigs for the advice tests: a flat approach, one constant-grade descent, a flat run-out,
+ * built directly as RouteProfile objects (tests/unit/thermal/route-helpers.ts). Rigs are the generic presets of
+ * lib/thermal or explicit variants of them.
+ */
+
+import { findDescents, type Descent, type PlacedWaypoint, type RouteProfile } from "@/lib/route";
+import { MID_SIZE_UTE, UTE_AND_CARAVAN, type Rig } from "@/lib/thermal";
+import { soloRig } from "../thermal/rig-helpers";
+import { stretchesProfile } from "../thermal/route-helpers";
+
+/** A route with one descent between 3 km flats. */
+export interface OneDescent {
+  profile: RouteProfile;
+  descents: Descent[];
+  descent: Descent;
+}
+
+/**
+ * 3 km flat, a descent of `grade` over `lengthM`, 3 km flat (10 m steps, from 1,000 m).
+ * @param grade descent grade (negative)
+ * @param lengthM horizontal length of the descent, m
+ * @returns the route with its single descent
+ */
+export function oneDescent(grade: number, lengthM: number): OneDescent {
+  const profile = stretchesProfile([{ lengthM: 3000, grade: 0 }, { lengthM, grade }, { lengthM: 3000, grade: 0 }]);
+  const descents = findDescents(profile);
+  if (descents.length !== 1) throw new Error(`expected one descent, found ${descents.length}`);
+  return { profile, descents, descent: descents[0]! };
+}
+
+/** The ute and tandem caravan preset (5,360 kg, electric drums, gain 1). */
+export const UTE_VAN: Rig = UTE_AND_CARAVAN;
+
+/** The mid-size ute alone at 2,600 kg. */
+export const SOLO_UTE: Rig = soloRig(2600);
+
+/** A silly rig: 4,500 kg on tiny solid discs and drums. Nothing should be enough on a long steep descent. */
+export const SILLY_RIG: Rig = soloRig(4500, {
+  gvmKg: 6000,
+  gcmKg: 9000,
+  frontBrakes: { kind: "solid-disc", diameterM: 0.25, massKg: 4 },
+  rearBrakes: { kind: "drum", diameterM: 0.2, massKg: 3 },
+});
+
+/** The ute and caravan with override (surge) brakes on the caravan. */
+export const UTE_VAN_OVERRIDE: Rig = { ...UTE_AND_CARAVAN, trailer: { ...UTE_AND_CARAVAN.trailer!, brakeType: "override", breakaway: "cable" } };
+
+/** The ute and caravan with the electric controller gain set low (0.5). */
+export const UTE_VAN_LOW_GAIN: Rig = { ...UTE_AND_CARAVAN, trailer: { ...UTE_AND_CARAVAN.trailer!, controllerGain: 0.5 } };
+
+/** A manual-gearbox ute (for the "manual mode" wording). */
+export const MANUAL_UTE: Rig = soloRig(2600, { transmission: { preset: "generic-6-speed-manual" } });
+
+/**
+ * A named waypoint placed on the route at a distance (as lib/route placeWaypoints would place it).
+ * @param name the waypoint's name
+ * @param distanceM distance along the route (a sample distance), m
+ * @returns the placed waypoint
+ */
+export function waypointAt(name: string, distanceM: number): PlacedWaypoint {
+  return { name, lat: 0, lon: 0, distanceM, offsetM: 20 };
+}
+
+export { MID_SIZE_UTE };
