@@ -63,3 +63,28 @@ export function waypointAt(name: string, distanceM: number): PlacedWaypoint {
 }
 
 export { MID_SIZE_UTE };
+
+/** A route with two descents: its profile and descents. */
+export interface TwoDescents {
+  profile: RouteProfile;
+  descents: Descent[];
+}
+
+/**
+ * 3 km flat, 8 % down for 3 km, 2 km flat, 5 % up for 2 km, 6 % down for 4 km, 2 km flat (10 m steps): two
+ * descents of 240 m each, the second longer and gentler, with a climb between them (21 km in all).
+ * @returns the route with its two descents
+ */
+export function twoDescents(): TwoDescents {
+  const profile = stretchesProfile([
+    { lengthM: 3000, grade: 0 },
+    { lengthM: 3000, grade: -0.08 },
+    { lengthM: 2000, grade: 0 },
+    { lengthM: 2000, grade: 0.05 },
+    { lengthM: 4000, grade: -0.06 },
+    { lengthM: 2000, grade: 0 },
+  ]);
+  const descents = findDescents(profile);
+  if (descents.length !== 2) throw new Error(`expected two descents, found ${descents.length}`);
+  return { profile, descents };
+}
