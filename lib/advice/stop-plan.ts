@@ -13,7 +13,7 @@ import type { PlacedWaypoint } from "@/lib/route";
 import { standstillTimeToReach, type CoolDownStop, type ResolvedModel } from "@/lib/thermal";
 import { runPlan, type DescentRun, type DescentRunner } from "./descent-runner";
 import { isBelow } from "./outcome";
-import { chooseStopSpot, firstCrossing, nearestIndex } from "./stop-place";
+import { chooseStopSpot, firstCrossing, nearestIndex, type StopSpot } from "./stop-place";
 import type { AdviceLine, DrivePlan, PlannedStop, StopAdvice } from "./types";
 import type { PreparedRoute } from "@/lib/thermal";
 
@@ -73,23 +73,45 @@ const MOVE_EARLIER_M = 200;
 
 /**
  * @private Place and prove one more stop. The rig must arrive at least `stopArrivalMarginK` below the line
- * (slowing for the stop heats the brakes); if it would not, the stop moves earlier, up to a few times.
+ * (slowing for the stop heats the brakes); if it would not, the stop moves earlier, up to a few times. Asked
+ * for the route's step, each place is first tried on the search-step piece: a place whose arrival there misses
+ * the margin by more than `doubtK` is passed over without a route-step run (only the last place tried is
+ * always proven at the route's step, since it is the one kept when no place meets the margin).
  */
 function placeStop(route: PreparedRoute, runner: DescentRunner, c: StopContext): { stop: PlannedStop; run: DescentRun } | null {
   const { settings, descent, model } = runner;
+  const screen = c.atRouteStep && runner.coarse !== runner.fine;
+  const margin = (arrivalC: readonly number[]) => Math.min(...model.positions.map((p, j) => lineOf(p, c.line) - (arrivalC[j] as number)));
+  const prove = (spot: StopSpot, atRouteStep: boolean) => {
+    const proven = proveStop(runner, c.basePlan, c.stops, spot.atM, estimateArrivalC(c.current, spot.atM), c.targets, atRouteStep);
+    return { stop: { ...proven.stop, place: spot.place }, run: proven.run };
+  };
   let latestM: number | undefined;
   let best: { stop: PlannedStop; run: DescentRun } | null = null;
+  let passedOver: StopSpot | null = null;
   for (let tries = 0; tries < MAX_PLACE_TRIES; tries++) {
     const window = { fromM: c.fromM, crestM: descent.startDistanceM, ...(latestM === undefined ? {} : { latestM }) };
     const spot = chooseStopSpot(route, c.current.result, c.crossing, window, c.targets, c.waypoints, settings);
-    if (spot === null) return best;
-    const proven = proveStop(runner, c.basePlan, c.stops, spot.atM, estimateArrivalC(c.current, spot.atM), c.targets, c.atRouteStep);
-    best = { stop: { ...proven.stop, place: spot.place }, run: proven.run };
-    const margin = Math.min(...model.positions.map((p, j) => lineOf(p, c.line) - (proven.stop.arrivalC[j] as number)));
-    if (margin >= settings.stopArrivalMarginK) return best;
+    if (spot === null) break;
     latestM = spot.atM - MOVE_EARLIER_M;
+    if (screen && margin(arrivalOnCoarse(runner, c, spot.atM)) < settings.stopArrivalMarginK - settings.doubtK) {
+      passedOver = spot;
+      continue;
+    }
+    passedOver = null;
+    best = prove(spot, c.atRouteStep);
+    if (margin(best.stop.arrivalC) >= settings.stopArrivalMarginK) return best;
   }
-  return best;
+  return passedOver === null ? best : prove(passedOver, c.atRouteStep);
+}
+
+/**
+ * @private Arrival temperatures at a stop on the search-step piece: one run with the stop at its estimated
+ * duration (the arrival, recorded before the stop cools anything, does not depend on the stop's own length).
+ */
+function arrivalOnCoarse(runner: DescentRunner, c: StopContext, atM: number): number[] {
+  const duration = stopDuration(runner.model, estimateArrivalC(c.current, atM), c.targets, runner.settings).durationS;
+  return stateAt(runPlan(runner, { ...c.basePlan, stops: [...c.stops, { atM, durationS: duration }] }, false), atM);
 }
 
 /** @private A brake's line temperature, °C. */
