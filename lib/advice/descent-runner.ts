@@ -20,8 +20,8 @@ import { coarsenRoute, sliceRoute } from "./route-window";
 import type { AdviceSettings } from "./settings";
 import type { AdviceLine, DrivePlan, RunOutcome } from "./types";
 
-/** Runs made so far, by resolution (for benchmarks and tests; never reset by the engine). */
-export const RUN_COUNTS = { fine: 0, coarse: 0 };
+/** Runs made so far: whole pieces by resolution, and runs up to a stop (for benchmarks and tests; never reset by the engine). */
+export const RUN_COUNTS = { fine: 0, coarse: 0, prefix: 0 };
 
 /** One run of a descent. */
 export interface DescentRun {

@@ -5,14 +5,15 @@
  * re-running the descent with it; the next stop, if one is needed, is placed on that re-run.
  *
  * The first stop is placed on the search-step run; every stop is proven at the route's step. The arrival state
- * includes the heat of slowing down for the stop: the first duration comes from an estimate of it, a run with
- * the stop in place gives the real one, and if the duration from that differs, the stop is run again with it.
+ * includes the heat of slowing down for the stop; it comes from a run up to the stop (arrivalAt), which gives
+ * it exactly, so the duration is right at once and each stop costs one full run of the descent.
  */
 
 import type { PlacedWaypoint } from "@/lib/route";
-import { standstillTimeToReach, type CoolDownStop, type ResolvedModel } from "@/lib/thermal";
-import { runPlan, type DescentRun, type DescentRunner } from "./descent-runner";
+import { runPrepared, standstillTimeToReach, type CoolDownStop, type ResolvedModel } from "@/lib/thermal";
+import { planOptions, runPlan, RUN_COUNTS, type DescentRun, type DescentRunner } from "./descent-runner";
 import { isBelow } from "./outcome";
+import { sliceRoute } from "./route-window";
 import { chooseStopSpot, firstCrossing, nearestIndex, type StopSpot } from "./stop-place";
 import type { AdviceLine, DrivePlan, PlannedStop, StopAdvice } from "./types";
 import type { PreparedRoute } from "@/lib/thermal";
@@ -73,45 +74,37 @@ const MOVE_EARLIER_M = 200;
 
 /**
  * @private Place and prove one more stop. The rig must arrive at least `stopArrivalMarginK` below the line
- * (slowing for the stop heats the brakes); if it would not, the stop moves earlier, up to a few times. Asked
- * for the route's step, each place is first tried on the search-step piece: a place whose arrival there misses
- * the margin by more than `doubtK` is passed over without a route-step run (only the last place tried is
- * always proven at the route's step, since it is the one kept when no place meets the margin).
+ * (slowing for the stop heats the brakes); if it would not, the stop moves earlier, up to a few times. Each
+ * place is judged on its arrival state alone (a run up to the stop, arrivalAt), so a place passed over costs
+ * no full run; only the place kept (the first that meets the margin, else the last tried) is run in full. At
+ * the route's step, a place whose arrival on the search-step piece misses the margin by more than `doubtK` is
+ * passed over on that alone.
  */
 function placeStop(route: PreparedRoute, runner: DescentRunner, c: StopContext): { stop: PlannedStop; run: DescentRun } | null {
   const { settings, descent, model } = runner;
-  const screen = c.atRouteStep && runner.coarse !== runner.fine;
   const margin = (arrivalC: readonly number[]) => Math.min(...model.positions.map((p, j) => lineOf(p, c.line) - (arrivalC[j] as number)));
-  const prove = (spot: StopSpot, atRouteStep: boolean) => {
-    const proven = proveStop(runner, c.basePlan, c.stops, spot.atM, estimateArrivalC(c.current, spot.atM), c.targets, atRouteStep);
-    return { stop: { ...proven.stop, place: spot.place }, run: proven.run };
-  };
+  const screen = c.atRouteStep && runner.coarse !== runner.fine;
+  const clearlyFails = (atM: number) =>
+    margin(arrivalAt(runner, c.basePlan, c.stops, atM, false)) < settings.stopArrivalMarginK - settings.doubtK;
   let latestM: number | undefined;
-  let best: { stop: PlannedStop; run: DescentRun } | null = null;
-  let passedOver: StopSpot | null = null;
+  let last: { spot: StopSpot; arrivalC: number[] | null } | null = null;
   for (let tries = 0; tries < MAX_PLACE_TRIES; tries++) {
     const window = { fromM: c.fromM, crestM: descent.startDistanceM, ...(latestM === undefined ? {} : { latestM }) };
     const spot = chooseStopSpot(route, c.current.result, c.crossing, window, c.targets, c.waypoints, settings);
     if (spot === null) break;
     latestM = spot.atM - MOVE_EARLIER_M;
-    if (screen && margin(arrivalOnCoarse(runner, c, spot.atM)) < settings.stopArrivalMarginK - settings.doubtK) {
-      passedOver = spot;
+    if (screen && clearlyFails(spot.atM)) {
+      last = { spot, arrivalC: null };
       continue;
     }
-    passedOver = null;
-    best = prove(spot, c.atRouteStep);
-    if (margin(best.stop.arrivalC) >= settings.stopArrivalMarginK) return best;
+    const arrivalC = arrivalAt(runner, c.basePlan, c.stops, spot.atM, c.atRouteStep);
+    last = { spot, arrivalC };
+    if (margin(arrivalC) >= settings.stopArrivalMarginK) break;
   }
-  return passedOver === null ? best : prove(passedOver, c.atRouteStep);
-}
-
-/**
- * @private Arrival temperatures at a stop on the search-step piece: one run with the stop at its estimated
- * duration (the arrival, recorded before the stop cools anything, does not depend on the stop's own length).
- */
-function arrivalOnCoarse(runner: DescentRunner, c: StopContext, atM: number): number[] {
-  const duration = stopDuration(runner.model, estimateArrivalC(c.current, atM), c.targets, runner.settings).durationS;
-  return stateAt(runPlan(runner, { ...c.basePlan, stops: [...c.stops, { atM, durationS: duration }] }, false), atM);
+  if (last === null) return null;
+  const arrivalC = last.arrivalC ?? arrivalAt(runner, c.basePlan, c.stops, last.spot.atM, c.atRouteStep);
+  const proven = proveStop(runner, c.basePlan, c.stops, last.spot.atM, arrivalC, c.targets, c.atRouteStep);
+  return { stop: { ...proven.stop, place: last.spot.place }, run: proven.run };
 }
 
 /** @private A brake's line temperature, °C. */
@@ -153,28 +146,54 @@ export function stopDuration(
   return { durationS: Math.min(minutes, limits.maxStopS), modelTimeS, capped: minutes > limits.maxStopS };
 }
 
-/** @private Run the descent with one more stop until its duration matches its arrival state. */
+/**
+ * Brake temperatures on arriving at a stop (after slowing for it), °C, exactly as a run with the stop gives
+ * them, from a run that ends at the stop. The trace records a sample before its stop cools anything, and
+ * nothing after a standstill changes the speeds before it (the backward pass starts again from zero there),
+ * so neither the stop's length nor the rest of the descent changes the arrival.
+ * @param runner the descent
+ * @param basePlan the driving plan
+ * @param stops the stops before this one (in route order)
+ * @param atM where the stop is, m
+ * @param atRouteStep at the route's step, or on the search-step piece
+ * @returns arrival temperature per position, °C
+ * @example arrivalAt(runner, { gear: 2 }, [], 31_900, true) // [262.4, 201.7, 240.3]
+ */
+export function arrivalAt(
+  runner: DescentRunner,
+  basePlan: DrivePlan,
+  stops: readonly CoolDownStop[],
+  atM: number,
+  atRouteStep: boolean,
+): number[] {
+  const piece = atRouteStep || runner.coarse === runner.fine ? runner.fine : runner.coarse;
+  const k = nearestIndex(piece.profile.distanceM, atM);
+  const plan = { ...basePlan, stops: [...stops.filter((s) => s.atM <= atM), { atM, durationS: 1 }] };
+  if (k < 1) return stateAt(runPlan(runner, plan, atRouteStep), atM);
+  const prefix = sliceRoute(piece, 0, k);
+  const result = runPrepared(prefix, runner.rig, planOptions(runner, plan, prefix));
+  RUN_COUNTS.prefix++;
+  return result.trace.rotorC.map((c) => c[k] as number);
+}
+
+/**
+ * @private Run the descent with one more stop, as long as the cooling model needs from its arrival state
+ * (which the stop's own length does not change, see arrivalAt).
+ */
 function proveStop(
   runner: DescentRunner,
   basePlan: DrivePlan,
   stops: readonly CoolDownStop[],
   atM: number,
-  estimateC: number[],
+  arrivalC: readonly number[],
   targets: number[],
   atRouteStep: boolean,
 ): { run: DescentRun; stop: Omit<PlannedStop, "place"> } {
   const { model, settings } = runner;
-  let duration = stopDuration(model, estimateC, targets, settings);
-  for (let attempt = 0; ; attempt++) {
-    const plan = { ...basePlan, stops: [...stops, { atM, durationS: duration.durationS }] };
-    const run = runPlan(runner, plan, atRouteStep);
-    const arrivalC = stateAt(run, atM);
-    const actual = stopDuration(model, arrivalC, targets, settings);
-    if (actual.durationS === duration.durationS || attempt === 2) {
-      return { run, stop: { atM, durationS: duration.durationS, arrivalC, targetC: targets, modelTimeS: actual.modelTimeS, capped: actual.capped } };
-    }
-    duration = actual;
-  }
+  const duration = stopDuration(model, arrivalC, targets, settings);
+  const run = runPlan(runner, { ...basePlan, stops: [...stops, { atM, durationS: duration.durationS }] }, atRouteStep);
+  const stop = { atM, durationS: duration.durationS, arrivalC: stateAt(run, atM), targetC: targets, modelTimeS: duration.modelTimeS, capped: duration.capped };
+  return { run, stop };
 }
 
 /** @private Brake temperatures at a distance in a run, °C. */
@@ -182,22 +201,4 @@ function stateAt(run: DescentRun, atM: number): number[] {
   const t = run.result.trace;
   const k = nearestIndex(t.distanceM, atM);
   return t.rotorC.map((c) => c[k] as number);
-}
-
-/**
- * @private Arrival temperatures if the rig stops at `atM`: the run's state there plus the kinetic energy of
- * slowing from the held speed, split as that step's friction work (an estimate for the first duration).
- */
-function estimateArrivalC(run: DescentRun, atM: number): number[] {
-  const t = run.result.trace;
-  const { model } = run.result;
-  const k = nearestIndex(t.distanceM, atM);
-  const v = t.speedMs[k] as number;
-  const energyJ = 0.5 * model.effectiveMassKg * v * v;
-  const work = t.energy.brakeJ.map((c) => c[k] as number);
-  const total = work.reduce((s, w) => s + w, 0);
-  return model.positions.map((p, j) => {
-    const share = total > 0 ? (work[j] as number) / total : 0;
-    return (t.rotorC[j]![k] as number) + (p.rotorPartition * energyJ * share) / (p.wheels * p.massKg * p.specificHeat);
-  });
 }
