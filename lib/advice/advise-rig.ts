@@ -25,7 +25,7 @@ import {
 import { adviseDescent, type DescentDraft } from "./advise-descent";
 import { descentRunner, planOptions, runPlan, type DescentRunner } from "./descent-runner";
 import { isBelow, outcomeOf } from "./outcome";
-import { coarsenRoute, sliceRoute } from "./route-window";
+import { routePieces } from "./route-window";
 import { DEFAULT_ADVICE_SETTINGS, type AdviceSettings } from "./settings";
 import { nearestIndex } from "./stop-place";
 import type { DescentAdvice, RigAdvice, RunOutcome } from "./types";
@@ -128,7 +128,7 @@ export function leadInIndex(route: PreparedRoute, descent: Descent, floorIndex: 
 /** @private Run the stretch [from, to] at the search step from a state, with the user's stops and controls. */
 function runStretch(route: PreparedRoute, runner: DescentRunner, from: number, to: number, start: ThermalState): HeatRunResult {
   const factor = Math.max(1, Math.round(runner.settings.searchStepM / route.profile.stepM));
-  const piece = coarsenRoute(sliceRoute(route, from, to), factor);
+  const piece = routePieces(route, from, to, factor).coarse;
   return runPrepared(piece, runner.rig, { ...planOptions(runner, {}, piece), startState: start });
 }
 

@@ -16,7 +16,7 @@ import {
   type ThermalState,
 } from "@/lib/thermal";
 import { isBelow, marginTo, outcomeOf } from "./outcome";
-import { coarsenRoute, sliceRoute } from "./route-window";
+import { routePieces } from "./route-window";
 import type { AdviceSettings } from "./settings";
 import type { AdviceLine, DrivePlan, RunOutcome } from "./types";
 
@@ -70,9 +70,8 @@ export function descentRunner(
   startState: ThermalState,
   context: { rig: Rig; base: HeatRunOptions; model: ResolvedModel; settings: AdviceSettings },
 ): DescentRunner {
-  const fine = sliceRoute(route, leadInIndex, descent.endIndex);
   const factor = Math.max(1, Math.round(context.settings.searchStepM / route.profile.stepM));
-  const coarse = coarsenRoute(fine, factor, [descent.startIndex - leadInIndex]);
+  const { fine, coarse } = routePieces(route, leadInIndex, descent.endIndex, factor, [descent.startIndex - leadInIndex]);
   return { descent, ...context, fine, coarse, startState, cache: new Map() };
 }
 

@@ -18,10 +18,9 @@ import type { AdviceLine, PositionOutcome, RunOutcome } from "./types";
  */
 export function outcomeOf(result: HeatRunResult, startM: number, endM: number): RunOutcome {
   const t = result.trace;
-  let a = 0;
-  while (a < t.length && (t.distanceM[a] as number) < startM - 1e-6) a++;
-  let b = t.length - 1;
-  while (b > a && (t.distanceM[b] as number) > endM + 1e-6) b--;
+  const a = firstAtOrAfter(t.distanceM, t.length, startM - 1e-6);
+  let b = firstAtOrAfter(t.distanceM, t.length, endM + 1e-6);
+  while (b > a && (b >= t.length || (t.distanceM[b] as number) > endM + 1e-6)) b--;
   if (a >= t.length || b <= a) throw new RangeError("the run does not cover the stretch");
   let worst = 0;
   for (let k = a; k <= b; k++) if ((t.worstClass[k] as number) > worst) worst = t.worstClass[k] as number;
@@ -62,6 +61,18 @@ export function marginTo(outcome: RunOutcome, line: AdviceLine): number {
  */
 export function isBelow(outcome: RunOutcome, line: AdviceLine): boolean {
   return marginTo(outcome, line) > 0;
+}
+
+/** @private First index in [0, n) whose distance is ≥ atM (n if none), by bisection (distances non-decreasing). */
+function firstAtOrAfter(d: Float64Array, n: number, atM: number): number {
+  let lo = 0;
+  let hi = n;
+  while (lo < hi) {
+    const mid = (lo + hi) >> 1;
+    if ((d[mid] as number) < atM) lo = mid + 1;
+    else hi = mid;
+  }
+  return lo;
 }
 
 /** @private One position over samples [a, b]; time at or above warm counts driving time (stops excluded). */
