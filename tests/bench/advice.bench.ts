@@ -28,7 +28,8 @@ const members = convoy12();
     [
       `advice bench: route ${profile.distanceM.length} samples at ${profile.stepM} m, ${descents.length} descents; 12 rigs.`,
       `  first convoy run (cold): ${ms.toFixed(0)} ms; verdict "${once.verdict}"; ${advised} rig-descents advised;`,
-      `  descent re-runs per convoy: ${RUN_COUNTS.fine - before.fine} at the route's step, ${RUN_COUNTS.coarse - before.coarse} at the search step.`,
+      `  descent re-runs per convoy: ${RUN_COUNTS.fine - before.fine} at the route's step, ${RUN_COUNTS.coarse - before.coarse} at the search step,`,
+      `  ${RUN_COUNTS.prefix - before.prefix} runs up to a stop (arrival only).`,
       `  goals: (a) convoy ≤ 300 ms, (b) what-if ≤ 16 ms (see "mean" below, in ms).`,
     ].join("\n"),
   );
