@@ -11,7 +11,15 @@ import { hashPassword } from "../lib/auth/password";
 import { createHash } from "node:crypto";
 import { runGpxJob } from "../lib/server/routes/gpx-job";
 import { createRoute, findRouteByContent } from "../lib/server/routes/routes-dal";
+import { and, eq } from "drizzle-orm";
 import { demoRoutes } from "./demo/generate-routes";
+import { DEMO_OWNER_RIGS, DEMO_TEAM_RIGS, type DemoRig } from "./demo/rigs";
+import { plans, rigs, routes } from "./schema";
+import { runPlanJob } from "../lib/analysis/plan-run";
+import { createRig } from "../lib/server/rigs/rigs-dal";
+import { rigSchema } from "../lib/validation/rig";
+import { createPlan } from "../lib/server/plans/plans-dal";
+import { computePlanRuns } from "../lib/server/plans/heat-runs";
 
 export const DEMO_PASSWORD = "switchback-demo-2026";
 
@@ -96,9 +104,101 @@ export async function seedDemoRoutes(): Promise<void> {
   }
 }
 
+/** The demo rigs: the operator's three, and the caravan owner's one. Found again by name. */
+async function seedRigs(organisationId: string, userId: string, list: DemoRig[]): Promise<Record<string, string>> {
+  const db = getDb();
+  const ids: Record<string, string> = {};
+  for (const r of list) {
+    const [found] = await db.select({ id: rigs.id }).from(rigs).where(and(eq(rigs.organisationId, organisationId), eq(rigs.name, r.name)));
+    ids[r.key] = found?.id ?? (await createRig(db, { userId }, organisationId, { name: r.name, region: "AU", rig: rigSchema.parse(r.rig) }));
+  }
+  return ids;
+}
+
+async function routeIdOf(organisationId: string, fileName: string): Promise<string> {
+  const [row] = await getDb().select({ id: routes.id }).from(routes).where(and(eq(routes.organisationId, organisationId), eq(routes.fileName, fileName)));
+  if (!row) throw new Error(`demo route ${fileName} is missing`);
+  return row.id;
+}
+
+/**
+ * The demo plans, with their heat runs and advice computed here (in-process: the app's worker bundles are built
+ * after seeding): the operator's shakedown on Marrow Creek Track and its Kestrel Gap crossing, and the caravan
+ * owner's own crossing. Found again by name; a plan that exists keeps its changes, and only stale runs re-run.
+ */
+export async function seedDemoPlans(): Promise<void> {
+  const db = getDb();
+  const planner = DEMO_USERS[1];
+  const caravan = DEMO_USERS[3];
+  const teamRigs = await seedRigs(TEAM.id, planner.id, DEMO_TEAM_RIGS);
+  const ownerOrg = personalOrgId(caravan.id);
+  const ownerRigs = await seedRigs(ownerOrg, caravan.id, DEMO_OWNER_RIGS);
+  const convoy = [
+    { rigId: teamRigs["lead-ute"]!, label: "Guide: Rafe" },
+    { rigId: teamRigs["ashcombe-van"]!, label: "The Ashcombes" },
+    { rigId: teamRigs["pell-camper"]!, label: "The Pells" },
+  ];
+  const wanted = [
+    {
+      organisationId: TEAM.id,
+      userId: planner.id,
+      input: {
+        name: "Marrow Creek shakedown",
+        routeId: await routeIdOf(TEAM.id, "marrow-creek-track.gpx"),
+        tripDate: "2027-03-13",
+        ambientC: 28,
+        startTempC: null,
+        speedPolicy: "standard" as const,
+        speedCapMs: null,
+        drivingStyle: "steady" as const,
+        notes: "First day of the autumn tag-along. Regroup at the creek crossing; UHF channel 12.",
+        rigs: convoy,
+      },
+    },
+    {
+      organisationId: TEAM.id,
+      userId: planner.id,
+      input: {
+        name: "Kestrel Gap crossing",
+        routeId: await routeIdOf(TEAM.id, "tallowmere-to-kestrel-gap.gpx"),
+        tripDate: "2027-03-15",
+        ambientC: 31,
+        startTempC: null,
+        speedPolicy: "standard" as const,
+        speedCapMs: null,
+        drivingStyle: "steady" as const,
+        notes: "The long pass day. Fuel at Tallowmere before the climb.",
+        rigs: convoy,
+      },
+    },
+    {
+      organisationId: ownerOrg,
+      userId: caravan.id,
+      input: {
+        name: "Over Kestrel Gap with the van",
+        routeId: await routeIdOf(ownerOrg, "tallowmere-to-kestrel-gap.gpx"),
+        tripDate: "2027-01-04",
+        ambientC: 33,
+        startTempC: null,
+        speedPolicy: "cautious" as const,
+        speedCapMs: null,
+        drivingStyle: "steady" as const,
+        notes: "",
+        rigs: [{ rigId: ownerRigs["holloway-van"]!, label: "Cass" }],
+      },
+    },
+  ];
+  for (const w of wanted) {
+    const [found] = await db.select({ id: plans.id }).from(plans).where(and(eq(plans.organisationId, w.organisationId), eq(plans.name, w.input.name)));
+    const planId = found?.id ?? (await createPlan(db, { userId: w.userId }, w.organisationId, w.input));
+    await computePlanRuns(db, { userId: w.userId }, planId, undefined, async (job) => runPlanJob(job));
+  }
+}
+
 if (process.argv[1]?.endsWith("seed.ts")) {
   seedDemo()
     .then(() => seedDemoRoutes())
+    .then(() => seedDemoPlans())
     .then(() => console.log(describeDemoAccounts()))
     .catch((error: unknown) => {
       console.error("seeding failed:", error instanceof Error ? error.message : error);

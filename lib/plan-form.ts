@@ -1,4 +1,4 @@
-import { M_PER_MI, type UnitSystem } from "@/lib/units";
+import { formatSpeed, formatTemperature, M_PER_MI, type UnitSystem } from "@/lib/units";
 import type { PlanInput } from "@/lib/validation/plan";
 
 /** The plan form in the user's units (°C/°F, km/h or mph), as typed. */
@@ -52,3 +52,20 @@ export function formToInput(v: PlanFormValues, units: UnitSystem): unknown {
   };
 }
 
+
+/** A plan's conditions in one plain sentence, in the user's units. */
+export function planConditionsText(
+  p: { tripDate: string | null; ambientC: number; startTempC: number | null; speedPolicy: "standard" | "cautious" | "cap"; speedCapMs: number | null; drivingStyle: "steady" | "snub" },
+  units: UnitSystem,
+): string {
+  const date = p.tripDate ? `Trip on ${new Date(`${p.tripDate}T12:00:00Z`).toLocaleDateString("en-AU", { day: "numeric", month: "long", year: "numeric", timeZone: "UTC" })}. ` : "";
+  const start = p.startTempC === null ? "brakes start at air temperature" : `brakes start at ${formatTemperature(p.startTempC, units)}`;
+  const policy =
+    p.speedPolicy === "cap" && p.speedCapMs !== null
+      ? `descents held at ${formatSpeed(p.speedCapMs, units)} at most`
+      : p.speedPolicy === "cautious"
+        ? "cautious descent speeds (10 km/h under the standard ones)"
+        : "standard descent speeds";
+  const style = p.drivingStyle === "snub" ? "snub braking" : "steady light braking";
+  return `${date}Air ${formatTemperature(p.ambientC, units)}; ${start}; ${policy}; ${style}.`;
+}

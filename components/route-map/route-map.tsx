@@ -23,6 +23,29 @@ import { gradeColouring, type RouteColouring } from "./grade-colours";
 import { loadMapExtracts } from "./map-extracts";
 import { addRoute, fitPadding, hoverMarkerElement, loadMapLib, readyLabelFont, updateRoute, WORLD_ARCHIVE_URL } from "./map-setup";
 
+/** A point marked on the route line. */
+export interface MapPin {
+  /** Stable key. */
+  id: string;
+  /** Distance along the route, m. */
+  distanceM: number;
+  /** Short text on the pin, e.g. "Hottest 531 °C". */
+  label: string;
+  /** CSS colour of the pin. */
+  colour: string;
+}
+
+/** @private The element of one pin: a rounded label with a pointer, in the pin's colour. */
+function pinElement(pin: MapPin): HTMLElement {
+  const el = document.createElement("div");
+  el.className = "route-pin";
+  el.dataset.testid = "map-pin";
+  el.setAttribute("aria-label", pin.label);
+  el.style.cssText = `background:${pin.colour};color:#fff;font:600 11px/1.2 system-ui,sans-serif;padding:2px 6px;border-radius:6px;border:1.5px solid #fff;box-shadow:0 1px 3px rgba(0,0,0,.35);white-space:nowrap;pointer-events:none`;
+  el.textContent = pin.label;
+  return el;
+}
+
 /** Props of {@link RouteMap}. */
 export interface RouteMapProps {
   /** The route to draw (SI units). */
@@ -35,6 +58,8 @@ export interface RouteMapProps {
   onHoverDistance?: (distanceM: number | null) => void;
   /** How to colour the line; default by grade. */
   colouring?: RouteColouring;
+  /** Points to mark on the line (hottest points, advice points), each with a short label. */
+  pins?: readonly MapPin[];
   /** Classes of the container (give it a height). */
   className?: string;
 }
@@ -55,7 +80,7 @@ function mapLabel(view: RouteView, system: UnitSystem): string {
 }
 
 /** The route map. Renders a `data-testid="route-map"` container; give it a height through `className`. */
-export function RouteMap({ view, unitSystem, hoverDistanceM, onHoverDistance, colouring = gradeColouring, className }: RouteMapProps) {
+export function RouteMap({ view, unitSystem, hoverDistanceM, onHoverDistance, colouring = gradeColouring, pins, className }: RouteMapProps) {
   const hostRef = useRef<HTMLDivElement>(null);
   const mapRef = useRef<MlMap | null>(null);
   const markerRef = useRef<Marker | null>(null);
@@ -162,6 +187,27 @@ export function RouteMap({ view, unitSystem, hoverDistanceM, onHoverDistance, co
     setState("loading");
     map.once("idle", () => setState("idle"));
   }, [ready, view, colouring, unitSystem]);
+
+  // Pins: HTML markers above the line, replaced whenever the list changes.
+  const pinMarkers = useRef<Marker[]>([]);
+  useEffect(() => {
+    const map = mapRef.current;
+    if (!ready || !map) return;
+    let live = true;
+    void loadMapLib().then((ml) => {
+      if (!live) return;
+      for (const m of pinMarkers.current) m.remove();
+      pinMarkers.current = (pins ?? []).flatMap((pin) => {
+        const at = positionAtDistance(view.line, pin.distanceM);
+        return at ? [new ml.Marker({ element: pinElement(pin), anchor: "bottom", offset: [0, -6] }).setLngLat(at).addTo(map)] : [];
+      });
+    });
+    return () => {
+      live = false;
+      for (const m of pinMarkers.current) m.remove();
+      pinMarkers.current = [];
+    };
+  }, [ready, view, pins]);
 
   // The linked hover marker.
   useEffect(() => {

@@ -92,7 +92,24 @@ export function analyzeRoute(
   options: HeatRunOptions = {},
   detail: TraceDetail = "sampled",
 ): AnalysisResult {
-  const result = runHeatRun(profile, rig, options);
+  return summarizeAnalysis(profile, descents, runHeatRun(profile, rig, options), detail);
+}
+
+/**
+ * The analysis result of a heat run already made (the plan runs reuse the run for the advice).
+ * @param profile the route the run covered
+ * @param descents its descents
+ * @param result the heat run
+ * @param detail how much of the trace to keep
+ * @returns the analysis result
+ * @example summarizeAnalysis(profile, descents, runHeatRun(profile, rig), "none").worstClass
+ */
+export function summarizeAnalysis(
+  profile: RouteProfile,
+  descents: readonly Descent[],
+  result: HeatRunResult,
+  detail: TraceDetail = "sampled",
+): AnalysisResult {
   const summaries = descents.length ? summarizeDescents(result, descents.map((d) => ({ startM: d.startDistanceM, endM: d.endDistanceM }))) : [];
   let worst = 0;
   for (let i = 0; i < result.trace.length; i++) worst = Math.max(worst, result.trace.worstClass[i]!);

@@ -24,6 +24,7 @@ export const AUDIT_ACTIONS = {
   "plan.updated": "changed a plan",
   "plan.deleted": "deleted a plan",
   "scenario.saved": "saved a scenario",
+  "scenario.deleted": "deleted a scenario",
 } as const;
 export type AuditAction = keyof typeof AUDIT_ACTIONS;
 
@@ -31,7 +32,7 @@ export interface AuditInput {
   organisationId: string;
   actorUserId: string | null;
   action: AuditAction;
-  targetType: "organisation" | "member" | "invitation" | "route" | "rig" | "plan";
+  targetType: "organisation" | "member" | "invitation" | "route" | "rig" | "plan" | "scenario";
   targetId: string;
   detail?: Record<string, string | number | boolean | null>;
 }

@@ -21,7 +21,21 @@ export const planInputSchema = z
   .refine((p) => p.speedPolicy !== "cap" || (p.speedCapMs ?? null) !== null, { message: "Enter the descent speed cap.", path: ["speedCapMs"] });
 export type PlanInput = z.infer<typeof planInputSchema>;
 
+/** A what-if's settings (lib/analysis/what-if.ts), SI units and °C; null = as in the plan. */
+export const whatIfSettingsSchema = z.strictObject({
+  planRigId: z.uuid("Choose a rig of the plan."),
+  applyAdvice: z.boolean(),
+  descentSpeedMs: z.number().min(10 / 3.6, "At least 10 km/h.").max(100 / 3.6, "At most 100 km/h.").nullable(),
+  gear: z.number().int("A whole gear number.").min(1, "From 1st gear.").max(12, "At most 12th gear.").nullable(),
+  ambientC: z.number().min(-30, "Between −30 and 55 °C.").max(55, "Between −30 and 55 °C.").nullable(),
+  trailerGain: z.number().min(0, "Gain between 0 and 2.").max(2, "Gain between 0 and 2.").nullable(),
+  vehiclePayloadKg: z.number().min(0, "Payload cannot be negative.").max(5000, "At most 5,000 kg.").nullable(),
+  trailerLoadKg: z.number().min(0, "Load cannot be negative.").max(5000, "At most 5,000 kg.").nullable(),
+  padFamily: z.enum(["organic", "ceramic", "semi-metallic"], { error: "Choose a pad family." }).nullable(),
+});
+
 export const scenarioInputSchema = z.strictObject({
   name: singleLine({ empty: "Name the scenario.", max: 120 }),
-  settings: z.record(z.string(), z.unknown()).refine((s) => JSON.stringify(s).length <= 20_000, "The scenario is too large."),
+  settings: whatIfSettingsSchema,
 });
+export type ScenarioInput = z.infer<typeof scenarioInputSchema>;

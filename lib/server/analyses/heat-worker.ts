@@ -1,13 +1,16 @@
 /**
- * Worker-thread entry: brake-heat runs of one or more rigs over one route, off the request thread.
- * Compiled to build/workers/heat-worker.mjs by scripts/build-workers.mjs.
+ * Worker-thread entry: brake-heat runs off the request thread. Two jobs: heat runs of one or more rigs over one
+ * route (analyses), and a plan's rigs with their advice (plans). Compiled to build/workers/heat-worker.mjs by
+ * scripts/build-workers.mjs.
  */
 import { parentPort, workerData } from "node:worker_threads";
 import { analyzeRoute, type TraceDetail } from "@/lib/analysis/analyze";
+import { runPlanJob, type PlanJob } from "@/lib/analysis/plan-run";
 import type { Descent, RouteProfile } from "@/lib/route";
 import type { HeatRunOptions, Rig } from "@/lib/thermal";
 
-interface Job {
+interface AnalysisJob {
+  kind?: "analysis";
   profile: RouteProfile;
   descents: Descent[];
   rigs: Rig[];
@@ -15,9 +18,13 @@ interface Job {
   detail: TraceDetail;
 }
 
-const job = workerData as Job;
+const job = workerData as AnalysisJob | PlanJob;
 try {
-  parentPort?.postMessage({ ok: true, results: job.rigs.map((rig) => analyzeRoute(job.profile, job.descents, rig, job.options, job.detail)) });
+  if (job.kind === "plan") {
+    parentPort?.postMessage({ ok: true, results: runPlanJob(job) });
+  } else {
+    parentPort?.postMessage({ ok: true, results: job.rigs.map((rig) => analyzeRoute(job.profile, job.descents, rig, job.options, job.detail)) });
+  }
 } catch (error) {
   // The model's guard clauses throw TypeError/RangeError with exact, user-readable messages.
   const invalid = error instanceof TypeError || error instanceof RangeError;
