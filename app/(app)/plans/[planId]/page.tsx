@@ -1,9 +1,9 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { buttonClasses } from "@/components/ui/button";
 import { PageHeader } from "@/components/ui/card";
 import { can } from "@/lib/auth/permissions";
 import { planConditionsText } from "@/lib/plan-form";
+import { PlanActions } from "./_components/plan-actions";
 import { PlanRunner } from "./_components/plan-runner";
 import { PlanView, type PlanViewMember } from "./_components/plan-view";
 import { loadPlan } from "./load-plan";
@@ -27,11 +27,7 @@ export default async function PlanPage({ params }: { params: Promise<{ planId: s
           </>
         }
         actions={
-          canEdit && (
-            <div className="flex gap-2">
-              <Link href={`/plans/${plan.id}/edit`} className={buttonClasses("secondary") + " no-underline"}>Edit plan</Link>
-            </div>
-          )
+          canEdit ? <PlanActions planId={plan.id} name={plan.name} /> : <span className="text-sm text-ink-muted">Read only: your role is viewer.</span>
         }
       />
       {plan.notes && <p className="mb-6 max-w-3xl whitespace-pre-line text-sm text-ink-soft" data-testid="plan-notes">{plan.notes}</p>}

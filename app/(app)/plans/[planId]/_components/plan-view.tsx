@@ -186,7 +186,7 @@ export function PlanView({
         <p className="text-xs font-medium uppercase tracking-wide text-ink-muted">Verdict for the convoy</p>
         <p className="text-2xl font-semibold">{verdictText.title}</p>
         <p className="mt-1 max-w-3xl text-sm">{verdictText.meaning}</p>
-        {members.length > 1 && verdict !== "clear" && (
+        {members.length > 1 && verdict !== "clear" && weakest.length < members.length && (
           <p className="mt-1 text-sm">
             Judged by the weakest {weakest.length === 1 ? "rig" : "rigs"}: {weakest.map((m) => `${m.label} (${m.rigName})`).join(", ")}.
           </p>
