@@ -119,7 +119,7 @@ export async function computePlanRuns(db: DbOrTx, actor: Actor, planId: string, 
       if (!still) return;
       await tx
         .insert(heatRuns)
-        .values({ planRigId: run.planRigId, inputsHash: run.inputsHash, modelVersion: result.analysis.modelVersion, result: stored, computedMs })
+        .values({ planRigId: run.planRigId, inputsHash: run.inputsHash, modelVersion: result.analysis.modelVersion, result: stored, computedMs, createdAt: now })
         .onConflictDoUpdate({ target: [heatRuns.planRigId, heatRuns.inputsHash], set: { result: stored, computedMs, modelVersion: result.analysis.modelVersion, createdAt: now } });
       await tx.delete(heatRuns).where(and(eq(heatRuns.planRigId, run.planRigId), notInArray(heatRuns.inputsHash, [run.inputsHash])));
     });
