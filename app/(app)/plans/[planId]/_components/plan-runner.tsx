@@ -1,11 +1,24 @@
 "use client";
 
 import { useRouter } from "next/navigation";
-import { useEffect, useRef, useState } from "react";
+import { useEffect, useState } from "react";
 import { Button, Spinner } from "@/components/ui/button";
 import { Card } from "@/components/ui/card";
 import { Notice } from "@/components/ui/notice";
 import { api } from "@/lib/client/api";
+
+/** Requests in flight, so a re-mounted runner waits for the same request instead of sending another. */
+const inFlight = new Map<string, Promise<unknown>>();
+function computeOnce(planId: string, planRigId: string, attempt: number): Promise<unknown> {
+  const key = `${planId}/${planRigId}/${attempt}`;
+  let request = inFlight.get(key);
+  if (!request) {
+    request = api(`/api/plans/${planId}/heat-runs`, { method: "POST", body: { planRigIds: [planRigId] } });
+    inFlight.set(key, request);
+    request.catch(() => inFlight.delete(key));
+  }
+  return request;
+}
 
 /**
  * Runs the heat model and the advice for the convoy's rigs whose results are missing or out of date, one rig
@@ -17,18 +30,14 @@ export function PlanRunner({ planId, pending, total }: { planId: string; pending
   const [done, setDone] = useState(0);
   const [problem, setProblem] = useState<string | null>(null);
   const [attempt, setAttempt] = useState(0);
-  const started = useRef(-1);
-
   useEffect(() => {
-    if (started.current === attempt) return;
-    started.current = attempt;
     let live = true;
     (async () => {
       setProblem(null);
       for (let k = 0; k < pending.length; k++) {
         if (!live) return;
         setDone(k);
-        await api(`/api/plans/${planId}/heat-runs`, { method: "POST", body: { planRigIds: [pending[k]!.planRigId] } });
+        await computeOnce(planId, pending[k]!.planRigId, attempt);
       }
       if (!live) return;
       setDone(pending.length);
@@ -58,7 +67,7 @@ export function PlanRunner({ planId, pending, total }: { planId: string; pending
             {done < pending.length ? `Rig ${fresh + done + 1} of ${total}: ${current?.label} (${current?.rigName}).` : "Done: loading the results."}{" "}
             {fresh > 0 && `${fresh} ${fresh === 1 ? "rig was" : "rigs were"} already up to date.`}
           </p>
-          <progress className="mt-3 h-2 w-full accent-pine-700" max={pending.length} value={done} aria-label="Heat runs done" />
+          <progress className="mt-3 h-2 w-full overflow-hidden rounded-full accent-pine-700" max={pending.length} value={done} aria-label="Heat runs done" />
           <p className="mt-2 text-xs text-ink-muted">Each rig takes a few seconds on a long route. Results are kept, so this happens only after the plan, a rig or the model changes.</p>
         </div>
       )}
