@@ -14,6 +14,7 @@ export const HEAT_COLOURS: Readonly<Record<StepClass, string>> = {
   warm: "#d99a1e",
   hot: "#d4561c",
   "boil-risk": "#8e2a7a",
+  runaway: "#1c1c1c",
 };
 
 /** Our words for the classes. */
@@ -22,9 +23,10 @@ export const CLASS_LABELS: Readonly<Record<StepClass, string>> = {
   warm: "Warm (caution)",
   hot: "Hot (fade likely)",
   "boil-risk": "Boil risk (brake fluid)",
+  runaway: "Runaway (brakes may fail)",
 };
 
-const ORDER: readonly StepClass[] = ["cool", "warm", "hot", "boil-risk"];
+const ORDER: readonly StepClass[] = ["cool", "warm", "hot", "boil-risk", "runaway"];
 
 /** A heat trace reduced to what colouring needs: distances (ascending) and the worst class at each. */
 export interface ClassTrace {
@@ -88,6 +90,7 @@ export function heatLegend(positions: readonly PositionThresholds[], system: Uni
     { id: "warm", colour: HEAT_COLOURS.warm, label: `${CLASS_LABELS.warm}: from ${at((p) => p.warmC)}` },
     { id: "hot", colour: HEAT_COLOURS.hot, label: `${CLASS_LABELS.hot}: from ${at((p) => p.hotC)}` },
     { id: "boil-risk", colour: HEAT_COLOURS["boil-risk"], label: `${CLASS_LABELS["boil-risk"]}: fluid near its estimated boiling point` },
+    { id: "runaway", colour: HEAT_COLOURS.runaway, label: `${CLASS_LABELS.runaway}: beyond Fadeline's range, or the brakes cannot hold the speed` },
   ];
 }
 

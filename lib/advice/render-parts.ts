@@ -13,6 +13,7 @@ export const CLASS_WORDS: Readonly<Record<StepClass, string>> = {
   warm: "caution",
   hot: "fade likely",
   "boil-risk": "brake-fluid boil risk",
+  runaway: "runaway: the brakes may fail",
 };
 
 /**

@@ -170,6 +170,7 @@ interface Thresholds {
   warm: Float64Array;
   hot: Float64Array;
   boil: Float64Array;
+  ceiling: Float64Array;
 }
 
 /** @private Per-position constants as typed columns (aligned with the positions). */
@@ -189,6 +190,7 @@ function positionColumns(positions: readonly BrakePositionSpec[]) {
       warm: col((p) => p.thresholds.warmC),
       hot: col((p) => p.thresholds.hotC),
       boil: col((p) => (p.fluid ? p.fluid.boilC : Infinity)),
+      ceiling: col((p) => p.validityCeilingC),
     } satisfies Thresholds,
   };
 }
@@ -201,7 +203,7 @@ function recordSample(trace: HeatTrace, k: number, temp: Float64Array, fluid: Fl
     const f = fluid[j] as number;
     (trace.rotorC[j] as Float64Array)[k] = t;
     (trace.fluidC[j] as Float64Array)[k] = f;
-    const cls = classify(t, f, th.warm[j] as number, th.hot[j] as number, th.boil[j] as number);
+    const cls = classify(t, f, th.warm[j] as number, th.hot[j] as number, th.boil[j] as number, th.ceiling[j] as number);
     (trace.stepClass[j] as Uint8Array)[k] = cls;
     if (cls > worst) worst = cls;
   }

@@ -4,7 +4,12 @@
  */
 
 import type { PadFamily } from "./rig";
-import { DEFAULT_PAD_THRESHOLDS, DEFAULT_WATER_UPTAKE_PCT_PER_YEAR, type PadThresholds } from "./thresholds";
+import {
+  DEFAULT_PAD_THRESHOLDS,
+  DEFAULT_VALIDITY_CEILINGS_C,
+  DEFAULT_WATER_UPTAKE_PCT_PER_YEAR,
+  type PadThresholds,
+} from "./thresholds";
 import { CAST_IRON_SPECIFIC_HEAT, CAST_IRON_SPECIFIC_HEAT_SLOPE, DEFAULT_EMISSIVITY } from "./constants";
 
 /** Descent speed policy tier: on steps at least this steep downhill the driver holds at most this speed. */
@@ -34,6 +39,15 @@ export interface ModelParams {
   frontShare: number | null;
   /** Trailer controller gain k_c (0–2); null = the trailer's, else by brake type (override 0.75, electric 1) [E]. */
   trailerGain: number | null;
+  /**
+   * Multiplier on every rotor and drum mass (dimensionless > 0). Default 1. Conduction into the hub and wheel
+   * adds effective mass; catalogue masses vary; an uncertain parameter of the band (docs/model.md).
+   */
+  brakeMassScale: number;
+  /** Validity ceiling of a disc's bulk temperature, °C; above it the step is `runaway`. Default 600. */
+  ceilingDiscC: number;
+  /** Validity ceiling of a drum's bulk temperature, °C; above it the step is `runaway`. Default 590. */
+  ceilingDrumC: number;
   /** Share of the friction heat entering the rotor or drum γ (0–1). Default 0.9 [M] *Brake Design and Safety* (SAE, 1999) ch. 3 (§1.3). */
   rotorPartition: number;
   /** Drag area of the whole combination, m²; null = vehicle CdA + trailer added CdA. */
@@ -117,6 +131,9 @@ export const DEFAULT_PARAMS: Readonly<ModelParams> = {
   frontShare: null,
   trailerGain: null,
   rotorPartition: 0.9,
+  brakeMassScale: 1,
+  ceilingDiscC: DEFAULT_VALIDITY_CEILINGS_C.disc,
+  ceilingDrumC: DEFAULT_VALIDITY_CEILINGS_C.drum,
   cdaM2: null,
   rollingResistance: null,
   engineBrakingScale: 1,

@@ -70,6 +70,8 @@ export interface BrakePositionSpec {
   rotorPartition: number;
   /** Warm/hot thresholds, °C (estimates). */
   thresholds: PadThresholds;
+  /** Validity ceiling of the bulk temperature, °C: at or above it the step is `runaway` (docs/model.md). */
+  validityCeilingC: number;
   /** Hydraulic fluid at this position, or null (electric drums, mechanical override). */
   fluid: FluidSpec | null;
 }
@@ -191,7 +193,7 @@ function positionSpec(
     wheels,
     kind: brake.kind,
     diameterM: brake.diameterM,
-    massKg: brake.massKg,
+    massKg: brake.massKg * params.brakeMassScale,
     padFamily,
     standstillConductanceWK: REFERENCE_HA0_W_PER_K * scale,
     conductanceSlopeWK: REFERENCE_HA_SLOPE * scale,
@@ -202,6 +204,7 @@ function positionSpec(
     specificHeatSlope: params.variableSpecificHeat ? params.specificHeatSlope : 0,
     rotorPartition: params.rotorPartition,
     thresholds: { ...params.padThresholds[padFamily] },
+    validityCeilingC: brake.kind === "drum" ? params.ceilingDrumC : params.ceilingDiscC,
     fluid: fluid ? fluidSpec(fluid, params.waterUptakePctPerYear) : null,
   };
 }

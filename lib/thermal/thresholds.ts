@@ -7,7 +7,7 @@
 import type { FluidClass, PadFamily } from "./rig";
 
 /** Step classes in our words, in rising order of concern. The trace stores their index. */
-export const STEP_CLASSES = ["cool", "warm", "hot", "boil-risk"] as const;
+export const STEP_CLASSES = ["cool", "warm", "hot", "boil-risk", "runaway"] as const;
 
 /** A step class. */
 export type StepClass = (typeof STEP_CLASSES)[number];
@@ -84,17 +84,37 @@ export function fluidBoilingPointC(fluidClass: FluidClass, yearsSinceChange: num
 }
 
 /**
- * Class of one brake at one sample: boil-risk when the fluid proxy reaches the estimated boiling point, else
- * hot / warm / cool by the friction-material thresholds.
+ * Validity ceilings of the bulk temperature per brake kind, °C: past these a lumped bulk temperature no
+ * longer describes a working brake (docs/model.md, "Validity ceiling"), so the step is `runaway`.
+ * - Discs 600 °C: light-truck brake dynamometer tests run to about 600 °C (common practice, no published
+ *   source); a brake past that is outside any tested range.
+ * - Drums 590 °C: below the 677 °C (1,250 °F) "cherry red, danger of runaway from drum expansion" line and
+ *   at the 593 °C (1,100 °F) "oxidation" line of a reproduced heavy-truck brake lining temperature chart
+ *   (industry chart, low authority; the chart reads at the lining interface, which runs hotter than bulk).
+ */
+export const DEFAULT_VALIDITY_CEILINGS_C: Readonly<Record<"disc" | "drum", number>> = { disc: 600, drum: 590 };
+
+/**
+ * Class of one brake at one sample: runaway past the validity ceiling, else boil-risk when the fluid proxy
+ * reaches the estimated boiling point, else hot / warm / cool by the friction-material thresholds.
  * @param rotorC bulk rotor or drum temperature, °C
  * @param fluidC fluid proxy temperature, °C (NaN where there is no hydraulic fluid)
  * @param warmC warm threshold, °C
  * @param hotC hot threshold, °C
  * @param boilC estimated fluid boiling point, °C
+ * @param ceilingC validity ceiling, °C (default: none)
  * @returns index into {@link STEP_CLASSES}
  * @example classifyBrake(320, 120, 250, 300, 155) // 2 ("hot")
  */
-export function classifyBrake(rotorC: number, fluidC: number, warmC: number, hotC: number, boilC: number): number {
+export function classifyBrake(
+  rotorC: number,
+  fluidC: number,
+  warmC: number,
+  hotC: number,
+  boilC: number,
+  ceilingC = Infinity,
+): number {
+  if (rotorC >= ceilingC) return 4;
   if (fluidC >= boilC) return 3;
   if (rotorC >= hotC) return 2;
   if (rotorC >= warmC) return 1;

@@ -51,7 +51,7 @@ describe("grade classes", () => {
   it("are far from every brake-heat class colour in app/globals.css (ΔE76 > 20, several times a just-noticeable difference) and from each other (> 12)", () => {
     const css = readFileSync("app/globals.css", "utf8");
     const heat = [...css.matchAll(/--color-heat-[a-z]+:\s*(#[0-9a-f]{6})/gi)].map((m) => m[1]!);
-    expect(heat).toHaveLength(4);
+    expect(heat).toHaveLength(5);
     for (const band of GRADE_BANDS) for (const h of heat) expect(deltaE(band.colour, h), `${band.id} vs ${h}`).toBeGreaterThan(20);
     for (const a of GRADE_BANDS) for (const b of GRADE_BANDS) if (a !== b) expect(deltaE(a.colour, b.colour)).toBeGreaterThan(12);
   });

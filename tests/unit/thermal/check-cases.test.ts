@@ -153,7 +153,7 @@ export const C11_SPEC: BrakePositionSpec = {
   position: "front", wheels: 2, kind: "vented-disc", diameterM: 0.32, massKg: 10, padFamily: "organic",
   standstillConductanceWK: 4 * 0.2, conductanceSlopeWK: 0, radiatingAreaM2: 0.2, emissivity: 0.55,
   standstillFactor: 1, specificHeat: 460, specificHeatSlope: 0, rotorPartition: 0.9,
-  thresholds: { warmC: 250, hotC: 300 }, fluid: null,
+  thresholds: { warmC: 250, hotC: 300 }, validityCeilingC: 600, fluid: null,
 };
 
 describe("C11: standstill cool-down 300 → 100 °C ([D]; h range [S] stationary-disc study, J. Mech. Eng. 66(1) 2020)", () => {

@@ -129,8 +129,10 @@ describe("thresholds and classes", () => {
     expect(fluidBoilingPointC("DOT 4", 1, 2)).toBeCloseTo(230 - 75 * (2 / 3.7), 10);
     expect(fluidWaterContentPct("DOT 5", 5, 2)).toBe(0);
   });
-  it("classes in our words, worst first: boil-risk, hot, warm, cool", () => {
-    expect(STEP_CLASSES).toEqual(["cool", "warm", "hot", "boil-risk"]);
+  it("classes in our words, worst first: runaway, boil-risk, hot, warm, cool", () => {
+    expect(STEP_CLASSES).toEqual(["cool", "warm", "hot", "boil-risk", "runaway"]);
+    expect(classifyBrake(600, 160, 250, 300, 155, 600)).toBe(4);
+    expect(classifyBrake(599, 50, 250, 300, 155, 600)).toBe(2);
     expect(classifyBrake(100, 50, 250, 300, 155)).toBe(0);
     expect(classifyBrake(260, 50, 250, 300, 155)).toBe(1);
     expect(classifyBrake(300, 50, 250, 300, 155)).toBe(2);

@@ -9,7 +9,7 @@ import type { AnalysisResult } from "@/lib/analysis/analyze";
 import { api } from "@/lib/client/api";
 import { formatDistance, formatTemperature, type UnitSystem } from "@/lib/units";
 
-const CLASS_TEXT: Record<string, string> = { cool: "cool", warm: "warm (caution)", hot: "hot (fade likely)", "boil-risk": "boil risk (brake fluid)" };
+const CLASS_TEXT: Record<string, string> = { cool: "cool", warm: "warm (caution)", hot: "hot (fade likely)", "boil-risk": "boil risk (brake fluid)", runaway: "runaway (brakes may fail)" };
 
 export function TryOnRoute({ rigId, routes, unitSystem }: { rigId: string; routes: { id: string; name: string }[]; unitSystem: UnitSystem }) {
   const [routeId, setRouteId] = useState(routes[0]?.id ?? "");
