@@ -64,7 +64,7 @@ export function adviseDescent(
   const stop = isBelow(asPlanned.outcome, "hot") ? null : planStops(route, runner, {}, "hot", waypoints);
   const trailer = trailerAdvice(runner, asPlanned);
   const combined = combinedPlan(route, runner, gear, speed, stop, speeds, waypoints);
-  const walkingPlan = { gear: 1, speedMs: runner.settings.walkingPaceMs };
+  const walkingPlan = gearForSpeed(runner, runner.settings.walkingPaceMs);
   const walkingPace = runPlan(runner, walkingPlan, combined.nothingIsEnough || runner.coarse === runner.fine).outcome;
   const { nothingIsEnough } = combined;
   return { asPlanned, gear, speed, stop, trailer, nothingIsEnough, walkingPace, plan: combined.plan, planStops: combined.stops };

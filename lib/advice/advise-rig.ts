@@ -29,7 +29,9 @@ import { routePieces } from "./route-window";
 import { DEFAULT_ADVICE_SETTINGS, type AdviceSettings } from "./settings";
 import { nearestIndex } from "./stop-place";
 import type { DescentAdvice, RigAdvice, RunOutcome } from "./types";
-import { rigVerdict } from "./verdict";
+import type { Region } from "@/lib/compliance";
+import { legalReasons } from "./legal";
+import { rigVerdict, traceVerdict } from "./verdict";
 
 /** Input of {@link adviseRig}. */
 export interface AdviseRigInput {
@@ -47,6 +49,8 @@ export interface AdviseRigInput {
   asPlanned?: HeatRunResult;
   /** Advice-engine settings. */
   settings?: Partial<AdviceSettings>;
+  /** The rig's region, for its trailer-brake rule (null or absent: the mass ratings only). */
+  region?: Region | null;
 }
 
 /** @private A piece of the proof: a run from `startIndex` on. */
@@ -63,7 +67,7 @@ interface Piece {
  * @example adviseRig({ route: profile, descents, rig: UTE_AND_CARAVAN, waypoints }).verdict // "clear with advice"
  */
 export function adviseRig(input: AdviseRigInput): RigAdvice {
-  const route = "pathM" in input.route ? input.route : prepareRoute(validateRouteProfile(input.route));
+  const route = "pathM" in input.route ? input.route : prepareRoute(validateRouteProfile(input.route), input.descents);
   const settings = { ...DEFAULT_ADVICE_SETTINGS, ...input.settings };
   const base = input.options ?? {};
   const waypoints = input.waypoints ?? [];
@@ -97,11 +101,14 @@ export function adviseRig(input: AdviseRigInput): RigAdvice {
     asPlanned: planned[i]!,
     withAdvice: outcomeOf(pieceFor(pieces, d.startIndex).result, d.startDistanceM, d.endDistanceM),
   }));
+  const worstClass = { asPlanned: worstOf([{ startIndex: 0, result: asPlanned }]), withAdvice: worstOf(pieces) };
+  const legal = legalReasons(input.rig, input.region ?? null);
   return {
     descents: advice,
     proof,
-    worstClass: { asPlanned: worstOf([{ startIndex: 0, result: asPlanned }]), withAdvice: worstOf(pieces) },
-    verdict: rigVerdict(advice, flagged.length > 0),
+    worstClass,
+    verdict: legal.length > 0 ? "not advised" : traceVerdict(rigVerdict(advice, flagged.length > 0), worstClass),
+    legalReasons: legal,
     waypoints,
     modelVersion: asPlanned.modelVersion,
   };
@@ -145,6 +152,7 @@ function finishAdvice(
   const ends = (o: RunOutcome) => o.positions.map((p) => p.endC);
   return {
     descentIndex,
+    highRangeGears: model.highRangeGears,
     descent,
     crestState: stateAt(draft.asPlanned.result, nearestIndex(draft.asPlanned.result.trace.distanceM, descent.startDistanceM)),
     baseline: asPlanned,

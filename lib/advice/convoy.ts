@@ -59,7 +59,7 @@ export function adviseConvoy(input: {
   settings?: Partial<AdviceSettings>;
 }): ConvoyAdvice {
   if (input.members.length === 0) throw new RangeError("members must hold at least one rig");
-  const route = "pathM" in input.route ? input.route : prepareRoute(validateRouteProfile(input.route));
+  const route = "pathM" in input.route ? input.route : prepareRoute(validateRouteProfile(input.route), input.descents);
   const rigs = input.members.map((m) => ({
     label: m.label,
     advice: adviseRig({ ...input, route, rig: m.rig, options: m.options, asPlanned: m.asPlanned }),

@@ -10,7 +10,7 @@
  *   5 km/h step can pass between two that fail.
  */
 
-import { chooseDescentGear, fixedGearSpeedLimit, isDescentStep } from "@/lib/thermal";
+import { descentGear, fixedGearSpeedLimit, isDescentStep } from "@/lib/thermal";
 import { checkPlan, highestPassing, runPlan, type DescentRun, type DescentRunner } from "./descent-runner";
 import { isBelow } from "./outcome";
 import type { AdviceLine, DrivePlan, GearAdvice, SpeedAdvice } from "./types";
@@ -67,16 +67,23 @@ export function speedCandidates(runner: DescentRunner, plannedTopMs: number): nu
 
 /**
  * Gear advice: the highest gear that keeps every brake below the warm line at the held speed, the held speed
- * capped at the gear's rpm limit, with the converter locked on an automatic.
+ * capped at the gear's rpm limit, with the converter locked on an automatic. High range first; when even 1st
+ * is not enough and the rig has a low range, the highest low-range gear that is (its held speed also capped
+ * at the low-range speed cap). A driver reaches for low range only when high range will not do.
  * @param runner the descent
- * @returns the advice (gear null when even 1st is not enough)
+ * @returns the advice (gear null when no gear is enough)
  * @example gearAdvice(runner).gear // 2
  */
 export function gearAdvice(runner: DescentRunner): GearAdvice {
   const { model } = runner;
-  const count = model.overallRatios.length;
-  const found = searchHighest(runner, count, (i) => ({ gear: i + 1 }), "warm");
-  const gear = found.index >= 0 ? found.index + 1 : null;
+  const high = model.highRangeGears;
+  let found = searchHighest(runner, high, (i) => ({ gear: i + 1 }), "warm");
+  let offset = 0;
+  if (found.index < 0 && model.overallRatios.length > high) {
+    found = searchHighest(runner, model.overallRatios.length - high, (i) => ({ gear: high + i + 1 }), "warm");
+    offset = high;
+  }
+  const gear = found.index >= 0 ? offset + found.index + 1 : null;
   const outcome = found.run?.outcome ?? runPlan(runner, { gear: 1 }, false).outcome;
   return {
     gear,
@@ -119,9 +126,7 @@ export function speedAdvice(runner: DescentRunner, speeds: readonly number[]): S
  * @example gearForSpeed(runner, 30 / 3.6) // { gear: 1, speedMs: 8.33 }
  */
 export function gearForSpeed(runner: DescentRunner, speedMs: number): DrivePlan {
-  const { model } = runner;
-  const g = chooseDescentGear(speedMs, model.overallRatios, model.tyreDiameterM, model.params.maxRpm ?? 0);
-  return { gear: g + 1, speedMs };
+  return { gear: descentGear(runner.model, speedMs), speedMs };
 }
 
 /**
@@ -135,7 +140,7 @@ export function gearForSpeed(runner: DescentRunner, speedMs: number): DrivePlan 
  */
 export function topSpeedMs(run: DescentRun, runner: DescentRunner): number {
   const t = run.result.trace;
-  const grade = run.piece.profile.grade;
+  const grade = run.piece.descentGrade;
   let top = 0;
   let topAny = 0;
   for (let k = 0; k < t.length; k++) {

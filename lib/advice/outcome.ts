@@ -32,6 +32,11 @@ export function outcomeOf(result: HeatRunResult, startM: number, endM: number): 
     warm = Math.min(warm, p.warmC - p.peakC, fluidMargin);
     hot = Math.min(hot, p.hotC - p.peakC, fluidMargin);
   }
+  // Runaway where the brakes could not hold the speed, even below the lines: never "below" anything.
+  if (STEP_CLASSES[worst] === "runaway") {
+    warm = Math.min(warm, -HOLD_LOST_MARGIN_K);
+    hot = Math.min(hot, -HOLD_LOST_MARGIN_K);
+  }
   return {
     positions,
     worstClass: STEP_CLASSES[worst] ?? "cool",
@@ -40,6 +45,9 @@ export function outcomeOf(result: HeatRunResult, startM: number, endM: number): 
     stepM: ((t.distanceM[t.length - 1] as number) - (t.distanceM[0] as number)) / (t.length - 1),
   };
 }
+
+/** Margin given to a run whose brakes could not hold the speed, K (below zero: it passes no line). */
+const HOLD_LOST_MARGIN_K = 1;
 
 /**
  * Smallest margin to a line, K (> 0: every brake below it and no fluid boil risk).
@@ -98,6 +106,7 @@ function positionOutcome(result: HeatRunResult, j: number, a: number, b: number)
     endC: rotor[b] as number,
     warmC,
     hotC,
+    ceilingC: spec.validityCeilingC,
     timeWarmOrAboveS: warmS,
     peakFluidC: spec.fluid ? peakFluid : null,
     boilC: spec.fluid ? spec.fluid.boilC : null,

@@ -72,9 +72,36 @@ export function minutesText(s: number): string {
  */
 export function outcomeText(outcome: RunOutcome, system: UnitSystem, trailerNoun: string): string {
   const peaks = outcome.positions
-    .map((p) => `${p.position === "trailer" ? trailerNoun : p.position} ${formatTemperature(p.peakC, system)}`)
+    .map((p) => `${p.position === "trailer" ? trailerNoun : p.position} ${peakText(p.peakC, p.ceilingC, system)}`)
     .join(", ");
   return `${peaks}: ${CLASS_WORDS[outcome.worstClass]}`;
+}
+
+/** What Fadeline prints instead of a temperature past a brake's validity ceiling (docs/model.md). */
+export const BEYOND_RANGE_TEXT = "beyond Fadeline's range";
+
+/**
+ * A peak temperature in words: the temperature, or "beyond Fadeline's range" at or past the brake's validity
+ * ceiling (a bulk temperature there is not a number to trust).
+ * @param peakC peak, °C
+ * @param ceilingC the brake's validity ceiling, °C
+ * @param system unit system
+ * @returns e.g. "240 °C"
+ * @example peakText(1290, 600, "metric") // "beyond Fadeline's range"
+ */
+export function peakText(peakC: number, ceilingC: number, system: UnitSystem): string {
+  return peakC >= ceilingC ? BEYOND_RANGE_TEXT : formatTemperature(peakC, system);
+}
+
+/**
+ * A gear in words: "2nd", or "low range, 2nd" for a gear above the high-range gears.
+ * @param gear 1-based gear
+ * @param highRangeGears number of high-range gears
+ * @returns the name
+ * @example gearText(8, 6) // "low range, 2nd"
+ */
+export function gearText(gear: number, highRangeGears: number): string {
+  return gear > highRangeGears ? `low range, ${ordinal(gear - highRangeGears)}` : ordinal(gear);
 }
 
 /**

@@ -6,7 +6,7 @@
 
 import { formatDistance, formatGrade, formatElevation, type UnitSystem } from "@/lib/units";
 import { GENERAL_CAUTIONS, NOTHING_IS_ENOUGH_OPTIONS, STANDSTILL_CAUTIONS } from "./cautions";
-import { at, CLASS_WORDS, lengthText, minutesText, ordinal, outcomeText, speedLimitText, stopPlaceText } from "./render-parts";
+import { at, CLASS_WORDS, gearText, lengthText, minutesText, outcomeText, speedLimitText, stopPlaceText } from "./render-parts";
 import { trailerNoteText } from "./render-trailer";
 import type { DescentAdvice, PlannedStop, RigAdvice } from "./types";
 
@@ -77,13 +77,13 @@ function planLine(a: DescentAdvice, system: UnitSystem, noun: string): string {
   if (a.nothingIsEnough) {
     const pace = plan.speedMs === undefined ? "walking pace" : speedLimitText(plan.speedMs, system);
     return `Nothing we can suggest keeps these brakes out of the fade range on this descent: even the gentlest plan ` +
-      `(${ordinal(plan.gear ?? 1)} held, at ${pace}) gives ${result}. ` +
+      `(${gearText(plan.gear ?? 1, a.highRangeGears)} held, at ${pace}) gives ${result}. ` +
       `Please ${NOTHING_IS_ENOUGH_OPTIONS.slice(0, -1).join(", ")}, or ${NOTHING_IS_ENOUGH_OPTIONS.at(-1)}.`;
   }
   const parts: string[] = [];
   if (plan.gear !== undefined) {
     const top = plan.speedMs === undefined && a.gear.heldTopMs !== null ? ` (up to ${speedLimitText(a.gear.heldTopMs, system)})` : "";
-    parts.push(`select ${ordinal(plan.gear)}${a.gear.manualMode ? " in manual mode" : ""} and hold it${top}`);
+    parts.push(`select ${gearText(plan.gear, a.highRangeGears)}${a.gear.manualMode ? " in manual mode" : ""} and hold it${top}`);
   }
   if (plan.speedMs !== undefined) parts.push(`keep to ${speedLimitText(plan.speedMs, system)}`);
   for (const s of a.plan.stops) parts.push(`stop for ${minutesText(s.durationS)} ${stopPlaceText(s, system)}`);
@@ -95,18 +95,18 @@ function planLine(a: DescentAdvice, system: UnitSystem, noun: string): string {
 /** @private */
 function gearLine(a: DescentAdvice, system: UnitSystem, result: (o: DescentAdvice["baseline"]) => string): string {
   const g = a.gear;
-  if (g.gear === null) return `Gear: no gear keeps the brakes below caution at the usual descent speed. In ${ordinal(1)}, held: ${result(g.outcome)}.`;
+  if (g.gear === null) return `Gear: no gear keeps the brakes below caution at the usual descent speed. In 1st, held: ${result(g.outcome)}.`;
   const limit = g.gearLimitMs === null ? "" : `; at ${g.maxRpm.toLocaleString("en")} rpm it allows up to ${speedLimitText(g.gearLimitMs, system)}`;
-  return `Gear: select ${ordinal(g.gear)} before the crest and hold it${g.manualMode ? " (manual mode, so the gearbox keeps it)" : ""}${limit}. ` +
+  return `Gear: select ${gearText(g.gear, a.highRangeGears)} before the crest and hold it${g.manualMode ? " (manual mode, so the gearbox keeps it)" : ""}${limit}. ` +
     `A higher gear is not enough. With this advice: ${result(g.outcome)}.`;
 }
 
 /** @private */
 function speedLine(a: DescentAdvice, system: UnitSystem, result: (o: DescentAdvice["baseline"]) => string): string {
   const s = a.speed;
-  if (s.speedMs === null) return `Speed: no steady speed down to walking pace keeps the brakes below caution. At walking pace in ${ordinal(s.gear)}: ${result(s.outcome)}.`;
+  if (s.speedMs === null) return `Speed: no steady speed down to walking pace keeps the brakes below caution. At walking pace in ${gearText(s.gear, a.highRangeGears)}: ${result(s.outcome)}.`;
   const faster = system === "metric" ? "5 km/h" : "about 3 mph";
-  return `Speed: keep to ${speedLimitText(s.speedMs, system)} in ${ordinal(s.gear)}${s.manualMode ? " (manual mode)" : ""}, held; ` +
+  return `Speed: keep to ${speedLimitText(s.speedMs, system)} in ${gearText(s.gear, a.highRangeGears)}${s.manualMode ? " (manual mode)" : ""}, held; ` +
     `${faster} faster is not enough. With this advice: ${result(s.outcome)}.`;
 }
 

@@ -35,6 +35,7 @@ export function sliceRoute(route: PreparedRoute, a: number, b: number): Prepared
     dropM: route.dropM.subarray(a, end),
     runM: route.runM.subarray(a, end),
     densityKgM3: route.densityKgM3.subarray(a, end),
+    descentGrade: route.descentGrade.subarray(a, end),
   };
 }
 
@@ -55,7 +56,7 @@ export function coarsenRoute(route: PreparedRoute, factor: number, keep: readonl
   const p = route.profile;
   const col = () => new Float64Array(m);
   const [distanceM, lat, lon, elevationM, grade, curveRadiusM] = [col(), col(), col(), col(), col(), col()];
-  const [pathM, dropM, runM, densityKgM3] = [col(), col(), col(), col()];
+  const [pathM, dropM, runM, densityKgM3, descentGrade] = [col(), col(), col(), col(), col()];
   const gapAfter = new Uint8Array(m);
   for (let q = 0; q < m; q++) {
     const i = idx[q] as number;
@@ -64,6 +65,7 @@ export function coarsenRoute(route: PreparedRoute, factor: number, keep: readonl
     lon[q] = p.lon[i] as number;
     elevationM[q] = p.elevationM[i] as number;
     curveRadiusM[q] = p.curveRadiusM[i] as number;
+    descentGrade[q] = route.descentGrade[i] as number;
     if (q + 1 === m) break;
     const j = idx[q + 1] as number;
     let path = 0, drop = 0, run = 0, rho = 0, gap = 0, radius = Infinity;
@@ -91,6 +93,7 @@ export function coarsenRoute(route: PreparedRoute, factor: number, keep: readonl
     dropM,
     runM,
     densityKgM3,
+    descentGrade,
   };
 }
 

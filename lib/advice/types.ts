@@ -23,6 +23,8 @@ export interface PositionOutcome {
   /** Warm (caution) and hot (fade-likely) lines of this brake, °C (estimates). */
   warmC: number;
   hotC: number;
+  /** Validity ceiling of this brake, °C: a peak at or past it is shown as "beyond Fadeline's range". */
+  ceilingC: number;
   /** Driving time at or above the warm line, s (time standing at a stop not counted). */
   timeWarmOrAboveS: number;
   /** Peak fluid proxy, °C (unvalidated), null without hydraulic fluid; and its estimated boiling point. */
@@ -162,6 +164,8 @@ export interface CombinedPlan {
 export interface DescentAdvice {
   /** Index into the route's descents. */
   descentIndex: number;
+  /** Number of high-range gears: gears above it are low range (lib/thermal gearName). */
+  highRangeGears: number;
   /** The descent (from lib/route). */
   descent: Descent;
   /** Brake state at the crest with the earlier descents' plans applied (what the advice starts from), °C. */
@@ -194,6 +198,8 @@ export interface RigAdvice {
   worstClass: { asPlanned: StepClass; withAdvice: StepClass };
   /** Verdict for this rig (see convoy.ts for the rule). */
   verdict: Verdict;
+  /** Mass ratings and trailer-brake rules the rig fails, in plain words; any makes the verdict "not advised". */
+  legalReasons: string[];
   /** The waypoints the advice could name. */
   waypoints: readonly PlacedWaypoint[];
   /** Model version of every run. */

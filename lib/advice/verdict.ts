@@ -8,6 +8,7 @@
  *   a brake in the warm band; that is said plainly in the advice ("caution"), but it is not a reason to refuse.
  */
 
+import type { StepClass } from "@/lib/thermal";
 import type { DescentAdvice, Verdict } from "./types";
 
 /** Verdicts from best to worst. */
@@ -25,6 +26,22 @@ export function rigVerdict(advice: readonly DescentAdvice[], reachedWarm = advic
   if (!reachedWarm) return "clear";
   const fails = advice.some((a) => a.nothingIsEnough || a.plan.status === "above-hot");
   return fails ? "not advised" : "clear with advice";
+}
+
+/**
+ * The verdict held against the whole-route heat trace: it never says less than the trace. A route whose trace
+ * reaches warm anywhere as planned is not "clear"; one whose trace with the advice applied still reaches hot,
+ * boil risk or runaway anywhere is "not advised" (docs/model.md, "Verdict").
+ * @param verdict the verdict from the descent advice (rigVerdict)
+ * @param worst worst class over the whole route, as planned and with the advice applied
+ * @returns the verdict, never milder than the trace
+ * @example traceVerdict("clear", { asPlanned: "hot", withAdvice: "hot" }) // "not advised"
+ */
+export function traceVerdict(verdict: Verdict, worst: { asPlanned: StepClass; withAdvice: StepClass }): Verdict {
+  const severe = worst.withAdvice === "hot" || worst.withAdvice === "boil-risk" || worst.withAdvice === "runaway";
+  if (severe) return "not advised";
+  if (verdict === "clear" && worst.asPlanned !== "cool") return "clear with advice";
+  return verdict;
 }
 
 /**

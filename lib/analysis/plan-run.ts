@@ -5,6 +5,7 @@
  */
 
 import { adviseRig, type RigAdvice } from "@/lib/advice";
+import type { Region } from "@/lib/compliance";
 import type { Descent, PlacedWaypoint, RouteProfile } from "@/lib/route";
 import { prepareRoute, runPrepared, validateRouteProfile, type HeatRunOptions, type PreparedRoute, type Rig } from "@/lib/thermal";
 import { summarizeAnalysis, type AnalysisResult } from "./analyze";
@@ -25,6 +26,7 @@ export interface PlanRigResult {
  * @param waypoints the route's placed waypoints (names for stop places)
  * @param rig the rig
  * @param options the plan's conditions as model options
+ * @param region the rig's region, for its trailer-brake rule (null: the mass ratings only)
  * @returns analysis and advice
  * @example runPlanRig(prepareRoute(profile), profile, descents, [], UTE_AND_CARAVAN, {}).advice.verdict
  */
@@ -35,10 +37,11 @@ export function runPlanRig(
   waypoints: readonly PlacedWaypoint[],
   rig: Rig,
   options: HeatRunOptions,
+  region: Region | null = null,
 ): PlanRigResult {
   const asPlanned = runPrepared(route, rig, options);
   const analysis = summarizeAnalysis(profile, descents, asPlanned, "sampled");
-  const advice = adviseRig({ route, descents, rig, options, waypoints, asPlanned });
+  const advice = adviseRig({ route, descents, rig, options, waypoints, asPlanned, region });
   return { analysis, advice };
 }
 
@@ -48,7 +51,7 @@ export interface PlanJob {
   profile: RouteProfile;
   descents: Descent[];
   waypoints: PlacedWaypoint[];
-  members: { rig: Rig; options: HeatRunOptions }[];
+  members: { rig: Rig; options: HeatRunOptions; region?: Region | null }[];
 }
 
 /** Each member's result with the time it took, ms. */
@@ -61,10 +64,10 @@ export type PlanJobResults = { result: PlanRigResult; computedMs: number }[];
  * @example runPlanJob({ kind: "plan", profile, descents, waypoints: [], members: [{ rig, options: {} }] })[0].result.advice.verdict
  */
 export function runPlanJob(job: PlanJob): PlanJobResults {
-  const route = prepareRoute(validateRouteProfile(job.profile));
+  const route = prepareRoute(validateRouteProfile(job.profile), job.descents);
   return job.members.map((m) => {
     const started = performance.now();
-    const result = runPlanRig(route, job.profile, job.descents, job.waypoints, m.rig, m.options);
+    const result = runPlanRig(route, job.profile, job.descents, job.waypoints, m.rig, m.options, m.region ?? null);
     return { result, computedMs: Math.round(performance.now() - started) };
   });
 }

@@ -47,7 +47,7 @@ export const BRAKE_RULES: Readonly<Record<Region, RegionRule>> = {
     region: "AU",
     title: "Australia: ADR 38 / VSB 1 trailer brakes (states add extras)",
     summary: "Up to 750 kg no brakes; 751–2,000 kg brakes on one axle, override allowed; over 2,000 kg brakes on all wheels operable from the driver's seat, no override, breakaway holding ≥ 15 min (to 4,500 kg ATM).",
-    massBasis: "GTM (some guides key it to ATM: verify which)",
+    massBasis: "ATM (ADR 38/05 sets its trailer classes by aggregate trailer mass)",
     sources: [
       src("ADR 38/05 – Trailer Brake Systems (legislation.gov.au F2018L00692)", null, "src"),
       src("National towing guide, braking systems (industry association)", "https://caravantowingguide.com.au/braking-systems/"),

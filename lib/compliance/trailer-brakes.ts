@@ -26,27 +26,19 @@ export function checkTrailerBrakes(rig: Rig, region: Region): TrailerBrakeCheck 
     reasons.push(`The towing vehicle's licensed weight is taken as its empty mass, ${round(vehicleKg)} kg: check the registration.`);
   }
   const atmBasis = Math.max(trailer.atmKg, masses.trailerKg);
-  let massKg = region === "NZ" ? masses.trailerKg : atmBasis;
-  if (region === "AU") {
-    massKg = Math.max(trailer.gtmKg ?? trailer.atmKg, masses.trailerAxlesKg);
-    if (trailer.gtmKg === undefined) reasons.push("No GTM given: the ATM was used, which may ask for more than the rule does.");
-    if (atmBasis > 4500) return outside(rule, atmBasis, reasons, "Over 4,500 kg ATM is outside the light-trailer rules (VSB 1 scope).");
+  // Each rule is judged on the mass it names: ADR 38/05 sets its trailer classes by ATM (the rated mass, or
+  // the loaded mass if higher), New Zealand's rule by the laden weight.
+  const massKg = region === "NZ" ? masses.trailerKg : atmBasis;
+  if (region === "AU" && atmBasis > 4500) {
+    return outside(rule, atmBasis, reasons, "Over 4,500 kg ATM is outside the light-trailer rules (VSB 1 scope).");
   }
   const requirement = rule.requirementAt(massKg, vehicleKg);
   if (requirement === null) return outside(rule, massKg, reasons, "This trailer is heavier than the rule on file covers.");
   const problems: string[] = [];
   const doubts: string[] = [];
   judge(rig, region, requirement, problems, doubts);
-  if (region === "AU" && trailer.gtmKg !== undefined) {
-    const byAtm = rule.requirementAt(atmBasis, vehicleKg);
-    const atmProblems: string[] = [];
-    if (byAtm) judge(rig, region, byAtm, atmProblems, []);
-    if (atmProblems.length > problems.length) {
-      doubts.push(`Some guides key this rule to ATM; at the ATM of ${round(atmBasis)} kg it asks: ${byAtm?.text ?? ""}`);
-    }
-  }
   const verdict: BrakeVerdict = problems.length > 0 ? "does-not-meet" : doubts.length > 0 ? "unclear" : "meets";
-  return { rule: publicRule(rule), massKg, requirement, verdict, reasons: [...reasons, ...problems, ...doubts] };
+  return { rule: publicRule(rule), massKg, requirement, verdict, reasons: [...reasons, ...problems, ...doubts], problems };
 }
 
 /** @private Compare the trailer with a requirement; push problems (fails) and doubts (cannot tell). */
@@ -80,7 +72,7 @@ function judge(rig: Rig, region: Region, r: BrakeRequirement, problems: string[]
 
 /** @private */
 function outside(rule: RegionRule, massKg: number, reasons: string[], why: string): TrailerBrakeCheck {
-  return { rule: publicRule(rule), massKg, requirement: null, verdict: "outside-rule", reasons: [...reasons, why] };
+  return { rule: publicRule(rule), massKg, requirement: null, verdict: "outside-rule", reasons: [...reasons, why], problems: [] };
 }
 
 /** @private The rule without its function (plain data for JSON). */

@@ -86,8 +86,10 @@ export interface TrailerBrakeCheck {
   requirement: BrakeRequirement | null;
   /** Verdict. */
   verdict: BrakeVerdict;
-  /** Reasons in plain words. */
+  /** Reasons in plain words (how the mass was taken, then the problems, then the doubts). */
   reasons: string[];
+  /** The ways the trailer fails the rule, in plain words (empty unless the verdict is "does-not-meet"). */
+  problems: string[];
 }
 
 /** A rule of thumb: common practice, not law. */

@@ -45,11 +45,13 @@ export function engineRpm(speedMs: number, overallRatio: number, tyreDiameterM: 
 }
 
 /**
- * The descent gear of the "rpm band" policy: the lowest gear whose engine speed at `speedMs` stays at or
- * below `maxRpm` (thermal-model.md §2: "pick the lowest gear that keeps rpm at or below the user limit").
- * Falls back to the top gear when even that over-revs.
+ * The descent gear of the "rpm band" policy: the lowest gear (largest overall ratio) whose engine speed at
+ * `speedMs` stays at or below `maxRpm` ("pick the lowest gear that keeps rpm at or below the user limit",
+ * docs/model.md, "Engine braking"). The ratios may hold a low range after the high range (ResolvedModel), so
+ * the largest fitting ratio is searched, not the first. Falls back to the gear with the smallest ratio when
+ * every gear over-revs.
  * @param speedMs road speed, m/s
- * @param overallRatios gear × final-drive ratio per gear, lowest gear first (dimensionless)
+ * @param overallRatios gear × final-drive ratio per gear (dimensionless)
  * @param tyreDiameterM tyre outer diameter, m
  * @param maxRpm highest accepted engine speed, rev/min
  * @returns gear index, 0-based (0 = first gear)
@@ -62,10 +64,14 @@ export function chooseDescentGear(
   maxRpm: number,
 ): number {
   const n = overallRatios.length;
+  let best = -1;
+  let smallest = 0;
   for (let g = 0; g < n; g++) {
-    if (engineRpm(speedMs, overallRatios[g] ?? 0, tyreDiameterM) <= maxRpm) return g;
+    const r = overallRatios[g] ?? 0;
+    if (r < (overallRatios[smallest] ?? 0)) smallest = g;
+    if (engineRpm(speedMs, r, tyreDiameterM) <= maxRpm && (best < 0 || r > (overallRatios[best] ?? 0))) best = g;
   }
-  return n - 1;
+  return best >= 0 ? best : smallest;
 }
 
 /**

@@ -1,6 +1,8 @@
 /**
  * Friction versus temperature: a fade curve of our own per friction family. ESTIMATE: no standard or
- * published curve stands behind these numbers (thermal-model.md §3.1: "no standard defines fade onset").
+ * published curve stands behind these numbers (no standard defines fade onset; docs/model.md, "Fade").
+ * The heat run (fade feedback: a fading brake hands work to the others) and the stopping-distance estimate
+ * (lib/stopping) use the same curve.
  *
  * The curve gives μ(T)/μ_cold, the friction coefficient relative to a cold brake:
  * - flat (1) up to the family's warm (caution) line;
@@ -10,8 +12,8 @@
  * slope at both ends), so it is smooth (C¹), never rises with temperature and never leaves [floorRatio, 1].
  */
 
-import type { PadFamily } from "@/lib/thermal";
-import { DEFAULT_PAD_THRESHOLDS } from "@/lib/thermal";
+import type { PadFamily } from "./rig";
+import { DEFAULT_PAD_THRESHOLDS } from "./thresholds";
 
 /** Label carried by every figure that uses the fade curve. */
 export const FADE_CURVE_LABEL = "estimate: a fade curve of our own, not a measured or published curve";

@@ -29,8 +29,9 @@ export { exactStepC, timeToReachC } from "./exact-step";
 export { heatPartitionRotor, splitRetardingWork, type MaterialProperties } from "./partition";
 export { FLUID_PROXY_LABEL, fluidProxyStepC } from "./fluid";
 export * from "./thresholds";
+export { FADE_CURVE_LABEL, FADE_SHAPES, fadeCurveFor, frictionRatio, type FadeCurve, type FadeShape } from "./fade";
 export * from "./params";
-export { resolveModel, type BrakePosition, type BrakePositionSpec, type FluidSpec, type ResolvedModel } from "./resolve";
+export { resolveModel, gearName, type BrakePosition, type BrakePositionSpec, type FluidSpec, type ResolvedModel } from "./resolve";
 export {
   standstillConductanceWK,
   coolBrakeAtStandstill,
@@ -41,7 +42,7 @@ export {
 } from "./standstill";
 export { prepareRoute, type PreparedRoute } from "./prepare-route";
 export { controlColumns, type ControlColumns, type RangeControl } from "./range-controls";
-export { targetSpeeds, heldSpeeds, isDescentStep, fixedGearSpeedLimit } from "./speed-profile";
+export { targetSpeeds, heldSpeeds, isDescentStep, fixedGearSpeedLimit, descentGear, GRADE_SLACK } from "./speed-profile";
 export type { HeatTrace, StepEnergies } from "./trace";
 export {
   runHeatRun,

@@ -7,11 +7,12 @@ import { CELSIUS_TO_KELVIN, CONVECTION_SPEED_EXPONENT, STANDARD_GRAVITY, STEFAN_
 import { specificHeat } from "./cooling";
 import { engineBrakingWheelPowerW, engineRpm } from "./engine";
 import { exactStepC } from "./exact-step";
+import { fadeCurveFor, frictionRatio, type FadeCurve } from "./fade";
 import { splitRetardingWork } from "./partition";
 import type { PreparedRoute } from "./prepare-route";
 import type { ControlColumns } from "./range-controls";
 import type { BrakePositionSpec, ResolvedModel } from "./resolve";
-import { heldSpeeds } from "./speed-profile";
+import { GRADE_SLACK, heldSpeeds } from "./speed-profile";
 import { standstillSubsteps, type ThermalState } from "./standstill";
 import { classifyBrake } from "./thresholds";
 import { allocateTrace, type HeatTrace } from "./trace";
@@ -24,6 +25,7 @@ const cOf = specificHeat;
 const wheelPower = engineBrakingWheelPowerW;
 const rpmOf = engineRpm;
 const splitWork = splitRetardingWork;
+const ratioOf = frictionRatio;
 const KELVIN = CELSIUS_TO_KELVIN;
 const SPEED_EXPONENT = CONVECTION_SPEED_EXPONENT;
 
@@ -71,18 +73,25 @@ export function integrateHeatRun(
   const maxRpm = params.maxRpm ?? 0;
   const fixedGear = params.gearPolicy.kind === "fixed" ? params.gearPolicy.gear - 1 : -1;
   const ratios = model.overallRatios;
-  const G = ratios.length;
+  const G = model.highRangeGears;
   const gentlest = params.descentSpeeds.reduce((m, t) => (t.minDescentGrade < m ? t.minDescentGrade : m), Infinity);
   // Highest speed in each gear at the descent rpm limit (the rpm-band policy picks the first gear that fits).
   const vAtMax = Float64Array.from(ratios, (r) => maxRpm / engineRpm(1, r, model.tyreDiameterM));
   const temp = Float64Array.from(start.rotorC);
   const fluid = Float64Array.from(start.fluidC);
   const { wheels, gamma, ha0, haSlope, radK, mass, c20, cSlope, splitIndex, th } = positionColumns(positions);
-  const split = new Float64Array(4);
+  const split = new Float64Array(5);
+  const fade = params.fadeFeedback;
+  const curves: FadeCurve[] = positions.map((p) => fadeCurveFor(p.padFamily, p.thresholds));
+  // Index of each split slot's position (front 1, rear 2, trailer 3), or −1 where the rig has none.
+  const slotPos = [-1, -1, -1, -1];
+  for (let j = 0; j < P; j++) slotPos[splitIndex[j] as number] = j;
+  const towCapN = params.towBrakeCapacityMs2 * (model.massKg - model.trailerKg);
+  const trailerCapN = params.trailerBrakeCapacityMs2 * model.trailerKg;
   const fluidGain = params.fluidGain;
   const fluidTau = params.fluidTimeConstantS;
   const E = trace.energy;
-  const grade = route.profile.grade;
+  const descentGrade = route.descentGrade;
   const gap = route.profile.gapAfter;
 
   recordSample(trace, 0, temp, fluid, th);
@@ -117,14 +126,27 @@ export function integrateHeatRun(
     let g = G - 1;
     const held = heldGear === null ? 0 : (heldGear[i] as number);
     if (held > 0) g = held - 1;
-    else if (fixedGear >= 0 && -(grade[i] as number) >= gentlest) g = fixedGear;
+    else if (fixedGear >= 0 && -(descentGrade[i] as number) >= gentlest - GRADE_SLACK) g = fixedGear;
     else for (let q = 0; q < G; q++) if (vm <= (vAtMax[q] as number)) { g = q; break; }
     if (surplus > 0) {
       trace.gear[k] = g + 1;
       const avail = fixedW !== null ? fixedW * dt
         : wheelPower(rpmOf(vm, ratios[g] ?? 1, model.tyreDiameterM), model.displacementM3,
           held > 0 ? lockedFactor : engineFactor, params.drivelineEfficiency, model.idleRpm) * dt;
-      splitWork(split, surplus, avail, model.trailerBrakeType, model.trailerMassShare, gain, frontShare);
+      let rF = 1;
+      let rR = 1;
+      let rT = 1;
+      if (fade) {
+        const jf = slotPos[1] as number;
+        const jr = slotPos[2] as number;
+        const jt = slotPos[3] as number;
+        if (jf >= 0) rF = ratioOf(temp[jf] as number, curves[jf] as FadeCurve);
+        if (jr >= 0) rR = ratioOf(temp[jr] as number, curves[jr] as FadeCurve);
+        if (jt >= 0) rT = ratioOf(temp[jt] as number, curves[jt] as FadeCurve);
+      }
+      splitWork(split, surplus, avail, model.trailerBrakeType, model.trailerMassShare, gain, frontShare,
+        rF, rR, rT, towCapN * dl, trailerCapN * dl);
+      trace.holdLost[k] = (split[4] as number) > 0 ? 1 : 0;
     } else {
       split.fill(0);
       E.driveJ[k] = -surplus;
@@ -160,6 +182,7 @@ export function integrateHeatRun(
       temp[j] = next;
     }
     recordSample(trace, k, temp, fluid, th);
+    if (trace.holdLost[k] === 1) markRunaway(trace, k);
     applyStop(stopS[k] as number, positions, temp, fluid, ta, fluidGain, fluidTau);
   }
   return { trace, finalState: { rotorC: Array.from(temp), fluidC: Array.from(fluid) } };
@@ -209,6 +232,15 @@ function recordSample(trace: HeatTrace, k: number, temp: Float64Array, fluid: Fl
   }
   trace.worstClass[k] = worst;
 }
+
+/** @private Class every position runaway at sample k (the brakes could not hold the speed there). */
+function markRunaway(trace: HeatTrace, k: number): void {
+  for (let j = 0; j < trace.stepClass.length; j++) (trace.stepClass[j] as Uint8Array)[k] = RUNAWAY;
+  trace.worstClass[k] = RUNAWAY;
+}
+
+/** Index of the runaway class in STEP_CLASSES. */
+const RUNAWAY = 4;
 
 /** @private Cool the state in place through a stop of `durationS` (no-op for 0). */
 function applyStop(

@@ -48,6 +48,22 @@ export interface ModelParams {
   ceilingDiscC: number;
   /** Validity ceiling of a drum's bulk temperature, °C; above it the step is `runaway`. Default 590. */
   ceilingDrumC: number;
+  /**
+   * Fade feedback: friction falls with temperature on the family's fade curve and a fading brake hands work
+   * to the others (docs/model.md, "Fade feedback"). Default true; false gives model 1's fixed split.
+   */
+  fadeFeedback: boolean;
+  /**
+   * Cold capacity of the tow vehicle's service brakes, as a deceleration of its own mass, m/s². Default 6.43
+   * [M] UN R13-H Annex 3 Type-0 laden minimum mean fully developed deceleration (a regulation floor, so a
+   * conservative capacity). Past r × this the brakes cannot hold the speed (runaway).
+   */
+  towBrakeCapacityMs2: number;
+  /**
+   * Cold capacity of the trailer's brakes, as a deceleration of its own mass, m/s². Default 0.45 g = 4.41
+   * [M] UN R13 Annex 4 minimum service braking of semi-trailers (45 % of the load on the wheels).
+   */
+  trailerBrakeCapacityMs2: number;
   /** Share of the friction heat entering the rotor or drum γ (0–1). Default 0.9 [M] *Brake Design and Safety* (SAE, 1999) ch. 3 (§1.3). */
   rotorPartition: number;
   /** Drag area of the whole combination, m²; null = vehicle CdA + trailer added CdA. */
@@ -88,6 +104,11 @@ export interface ModelParams {
   towingSpeedLimitMs: number;
   /** Descent speed policy, tiers in any order. Default 4 % → 70, 7 % → 55, 10 % → 45 km/h [E]. */
   descentSpeeds: readonly DescentSpeedTier[];
+  /**
+   * Fastest speed held in low range, m/s: a low-range gear caps the held speed here. Default 40 km/h (low
+   * range is for slow, steep going; common practice, no published source).
+   */
+  lowRangeMaxSpeedMs: number;
   /** Descent gear policy. Default rpm band. */
   gearPolicy: GearPolicy;
   /** Descent rpm limit, rev/min; null = by fuel (diesel 3,800, petrol 4,500 [E]) unless the engine gives one. */
@@ -132,6 +153,9 @@ export const DEFAULT_PARAMS: Readonly<ModelParams> = {
   trailerGain: null,
   rotorPartition: 0.9,
   brakeMassScale: 1,
+  fadeFeedback: true,
+  towBrakeCapacityMs2: 6.43,
+  trailerBrakeCapacityMs2: 0.45 * 9.80665,
   ceilingDiscC: DEFAULT_VALIDITY_CEILINGS_C.disc,
   ceilingDrumC: DEFAULT_VALIDITY_CEILINGS_C.drum,
   cdaM2: null,
@@ -157,6 +181,7 @@ export const DEFAULT_PARAMS: Readonly<ModelParams> = {
     { minDescentGrade: 0.07, speedMs: 55 / 3.6 },
     { minDescentGrade: 0.1, speedMs: 45 / 3.6 },
   ],
+  lowRangeMaxSpeedMs: 40 / 3.6,
   gearPolicy: { kind: "rpm-band" },
   maxRpm: null,
   fluidGain: 0.4,

@@ -3,6 +3,7 @@
  * Step i runs from sample i to sample i+1; a step flagged in `gapAfter` is not driven (length 0, no energy).
  */
 
+import { findDescents, type Descent } from "@/lib/route/find-descents";
 import type { RouteProfile } from "@/lib/route/types";
 import { isaAirDensity } from "./air";
 
@@ -20,15 +21,23 @@ export interface PreparedRoute {
   runM: Float64Array;
   /** ISA air density at each step's mean elevation, kg/m³. */
   densityKgM3: Float64Array;
+  /**
+   * The grade the driver picks the held speed by, per sample (rise over run, negative): on every sample of a
+   * descent, from its top to its bottom, that descent's steepest 1 km grade; 0 off descents. The driver picks
+   * one held speed per descent and keeps it; a short dip that is not a descent keeps the cruise speed
+   * (docs/model.md, "Held speed").
+   */
+  descentGrade: Float64Array;
 }
 
 /**
  * Compute the rig-independent per-step quantities of a (validated) profile.
  * @param profile the route profile
+ * @param descents the route's descents (default: found on the profile with lib/route's default rules)
  * @returns the prepared route
  * @example prepareRoute(profile).pathM[0] // length of the first step, m
  */
-export function prepareRoute(profile: RouteProfile): PreparedRoute {
+export function prepareRoute(profile: RouteProfile, descents?: readonly Descent[]): PreparedRoute {
   const n = profile.distanceM.length;
   const pathM = new Float64Array(n);
   const dropM = new Float64Array(n);
@@ -47,5 +56,10 @@ export function prepareRoute(profile: RouteProfile): PreparedRoute {
     dropM[i] = -dh;
     pathM[i] = Math.sqrt(dx * dx + dh * dh);
   }
-  return { profile, n, pathM, dropM, runM, densityKgM3 };
+  const descentGrade = new Float64Array(n);
+  for (const dsc of descents ?? findDescents(profile)) {
+    const to = Math.min(dsc.endIndex, n - 1);
+    for (let i = Math.max(0, dsc.startIndex); i <= to; i++) descentGrade[i] = dsc.steepest1kmGrade;
+  }
+  return { profile, n, pathM, dropM, runM, densityKgM3, descentGrade };
 }

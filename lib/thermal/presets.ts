@@ -49,7 +49,8 @@ export const MID_SIZE_UTE: TowVehicle = {
   brakeFluid: { fluidClass: "DOT 4", yearsSinceChange: 2 },
   tyreDiameterM: 0.78, // light-truck tyre, thermal-model.md §1.4
   engine: { displacementM3: 0.0028, fuel: "diesel", brakeMode: "motoring" },
-  transmission: { preset: "generic-6-speed-automatic" },
+  // Part-time 4WD transfer case: low range about 2.5–2.7:1 is common (from memory) [E].
+  transmission: { preset: "generic-6-speed-automatic", lowRangeRatio: 2.48 },
 };
 
 /** A large 4x4 wagon. [E] */
@@ -70,7 +71,7 @@ export const LARGE_WAGON: TowVehicle = {
   brakeFluid: { fluidClass: "DOT 4", yearsSinceChange: 2 },
   tyreDiameterM: 0.8,
   engine: { displacementM3: 0.0033, fuel: "diesel", brakeMode: "motoring" },
-  transmission: { preset: "generic-6-speed-automatic" },
+  transmission: { preset: "generic-6-speed-automatic", lowRangeRatio: 2.6 }, // low range [E], as above
 };
 
 /** A single-axle camper trailer. [E] */

@@ -92,8 +92,16 @@ export interface ResolvedModel {
   trailerBrakeType: TrailerBrakeType;
   /** Transmission used. */
   transmission: Transmission;
-  /** Gear × final-drive ratio per gear, lowest first. */
+  /**
+   * Gear × final-drive ratio per gear: the high-range gears, lowest first, then (with a low range) the same
+   * gears in low range (× the low-range ratio). Gear g (1-based) above {@link highRangeGears} is low range,
+   * gear g − highRangeGears (gearName in lib/thermal names it).
+   */
   overallRatios: number[];
+  /** Number of high-range gears (the first entries of {@link overallRatios}). */
+  highRangeGears: number;
+  /** Low-range ratio of the transfer case, or null without a low range. */
+  lowRangeRatio: number | null;
   /** Tyre outer diameter, m. */
   tyreDiameterM: number;
   /** Engine swept volume, m³. */
@@ -157,7 +165,9 @@ export function resolveModel(rig: Rig, input: ModelParamsInput = {}): ResolvedMo
     effectiveMassKg: masses.combinationKg * (1 + params.rotatingMassFactor),
     trailerBrakeType,
     transmission,
-    overallRatios: transmission.gearRatios.map((r) => r * transmission.finalDrive),
+    overallRatios: overallRatiosOf(transmission),
+    highRangeGears: transmission.gearRatios.length,
+    lowRangeRatio: transmission.lowRangeRatio ?? null,
     tyreDiameterM: vehicle.tyreDiameterM,
     displacementM3: vehicle.engine.displacementM3,
     idleRpm: vehicle.engine.idleRpm ?? DEFAULT_IDLE_RPM,
@@ -167,12 +177,35 @@ export function resolveModel(rig: Rig, input: ModelParamsInput = {}): ResolvedMo
   };
 }
 
+/** @private High-range overall ratios, then the low-range ones when there is a low range. */
+function overallRatiosOf(t: Transmission): number[] {
+  const high = t.gearRatios.map((r) => r * t.finalDrive);
+  return t.lowRangeRatio === undefined ? high : [...high, ...high.map((r) => r * (t.lowRangeRatio as number))];
+}
+
+/**
+ * A gear's name in plain words: "2nd", or "low range, 2nd".
+ * @param model resolved model
+ * @param gear 1-based gear index into overallRatios
+ * @returns the name
+ * @example gearName(model, 8) // "low range, 2nd" for a 6-speed with a low range
+ */
+export function gearName(model: Pick<ResolvedModel, "highRangeGears">, gear: number): string {
+  const low = gear > model.highRangeGears;
+  const n = low ? gear - model.highRangeGears : gear;
+  const tens = n % 100;
+  const suffix = tens >= 11 && tens <= 13 ? "th" : n % 10 === 1 ? "st" : n % 10 === 2 ? "nd" : n % 10 === 3 ? "rd" : "th";
+  return `${low ? "low range, " : ""}${n}${suffix}`;
+}
+
 /** @private The explicit transmission of a rig (a preset reference expanded). */
 function resolveTransmission(rig: Rig): Transmission {
   const t = rig.vehicle.transmission;
   if ("preset" in t) {
     const base = GENERIC_TRANSMISSIONS[t.preset];
-    return { ...base, gearRatios: [...base.gearRatios], converterLocked: t.converterLocked ?? false };
+    const out: Transmission = { ...base, gearRatios: [...base.gearRatios], converterLocked: t.converterLocked ?? false };
+    if (t.lowRangeRatio !== undefined) out.lowRangeRatio = t.lowRangeRatio;
+    return out;
   }
   return { ...t, gearRatios: [...t.gearRatios], converterLocked: t.converterLocked ?? false };
 }

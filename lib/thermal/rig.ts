@@ -87,6 +87,11 @@ export interface Transmission {
    * with the converter unlocked retards far less (thermal-model.md §2). Default false.
    */
   converterLocked?: boolean;
+  /**
+   * Low-range ratio of a 4WD's transfer case (dimensionless, > 1; about 2.5–2.7:1 is common, from memory).
+   * Absent: no low range. Low range multiplies every gear's ratio; advice may then say "low range, 2nd".
+   */
+  lowRangeRatio?: number;
 }
 
 /** A reference to one of the generic transmissions in presets.ts. */
@@ -95,6 +100,8 @@ export interface TransmissionPresetRef {
   preset: "generic-6-speed-automatic" | "generic-6-speed-manual";
   /** As {@link Transmission.converterLocked}. */
   converterLocked?: boolean;
+  /** As {@link Transmission.lowRangeRatio}. */
+  lowRangeRatio?: number;
 }
 
 /** The tow vehicle. */

@@ -1,20 +1,26 @@
 /**
  * The speed the driver holds at each sample: the lowest of the cruise cap, the towing speed limit, the curve
- * speed √(a_lat·R), the descent speed policy, a fixed descent gear's rpm limit, the caps of any stretch controls
+ * speed √(a_lat·R), the descent speed policy (one speed per descent, by its steepest 1 km grade: the driver
+ * picks a speed for the descent and keeps it, and a short dip that is not a descent does not slow the rig;
+ * PreparedRoute.descentGrade), a fixed descent gear's rpm limit, the caps of any stretch controls
  * (range-controls.ts), and 0 at a cool-down stop; then
  * a forward pass (acceleration limit) and a backward pass (deceleration limit), v² changing by at most 2·a·Δs per
  * step. On constant-speed stretches there is no kinetic term, as in the FHWA grade severity rating system's
  * constant descent speed (thermal-model.md §1.2).
  */
 
-import { engineRpm } from "./engine";
+import { chooseDescentGear, engineRpm } from "./engine";
 import type { PreparedRoute } from "./prepare-route";
 import type { ControlColumns } from "./range-controls";
 import type { ResolvedModel } from "./resolve";
 
+/** Slack on the tier grades (dimensionless): a grade built as exactly 7 % must reach the 7 % tier. */
+export const GRADE_SLACK = 1e-9;
+
 /**
- * Whether a step is a descent step of the speed policy (at least as steep as its gentlest tier).
- * @param grade step grade, rise over run (negative downhill)
+ * Whether a sample lies on a descent the speed policy applies to (its descent grade at least as steep as the
+ * gentlest tier).
+ * @param grade the sample's descent grade (PreparedRoute.descentGrade), rise over run (negative downhill)
  * @param model resolved model
  * @returns true on a descent step
  * @example isDescentStep(-0.08, model) // true with the default tiers
@@ -24,7 +30,7 @@ export function isDescentStep(grade: number, model: ResolvedModel): boolean {
   for (const tier of model.params.descentSpeeds) {
     if (tier.minDescentGrade < gentlest) gentlest = tier.minDescentGrade;
   }
-  return -grade >= gentlest;
+  return -grade >= gentlest - GRADE_SLACK;
 }
 
 /**
@@ -51,7 +57,7 @@ export function targetSpeeds(
   const fixedGearCap =
     params.gearPolicy.kind === "fixed" ? fixedGearSpeedLimit(model, params.gearPolicy.gear) : Infinity;
   const radius = route.profile.curveRadiusM;
-  const grade = route.profile.grade;
+  const grade = route.descentGrade;
   const controlCap = controls === null ? null : controls.speedCapMs;
   for (let i = 0; i < n; i++) {
     let v = cap;
@@ -61,7 +67,7 @@ export function targetSpeeds(
     let descent = false;
     for (let t = 0; t < tiers.length; t++) {
       const tier = tiers[t];
-      if (tier !== undefined && down >= tier.minDescentGrade) {
+      if (tier !== undefined && down >= tier.minDescentGrade - GRADE_SLACK) {
         descent = true;
         if (tier.speedMs < v) v = tier.speedMs;
       }
@@ -114,13 +120,37 @@ export function heldSpeeds(
 }
 
 /**
- * Highest road speed in a fixed gear at the descent rpm limit.
+ * Highest road speed in a fixed gear: the descent rpm limit, and in low range also the low-range speed cap.
  * @param model resolved model
- * @param gear 1-based gear
+ * @param gear 1-based gear (above model.highRangeGears: low range)
  * @returns speed, m/s
  * @example fixedGearSpeedLimit(model, 2) // ≈ 18.4 for the generic automatic at 3,800 rpm
  */
 export function fixedGearSpeedLimit(model: ResolvedModel, gear: number): number {
   const ratio = model.overallRatios[gear - 1] ?? 1;
-  return (model.params.maxRpm ?? 0) / engineRpm(1, ratio, model.tyreDiameterM);
+  const atRpm = (model.params.maxRpm ?? 0) / engineRpm(1, ratio, model.tyreDiameterM);
+  return gear > model.highRangeGears && model.params.lowRangeMaxSpeedMs < atRpm ? model.params.lowRangeMaxSpeedMs : atRpm;
+}
+
+/** A low-range gear is chosen over high range only if its ratio is at least this much larger (dimensionless). */
+const LOW_RANGE_GAIN = 1.15;
+
+/**
+ * The gear a driver would hold for a speed on a descent: the lowest high-range gear within the rpm limit; at
+ * or below the low-range speed cap, a low-range gear instead when it is clearly lower (its overall ratio at
+ * least 15 % larger, so it brakes noticeably more; otherwise changing range is not worth it).
+ * @param model resolved model
+ * @param speedMs held speed, m/s
+ * @returns 1-based gear (above model.highRangeGears: low range)
+ * @example descentGear(model, 10 / 3.6) // 7 (low range, 1st) for a 6-speed with a low range
+ */
+export function descentGear(model: ResolvedModel, speedMs: number): number {
+  const { overallRatios: ratios, highRangeGears: G, tyreDiameterM: d } = model;
+  const maxRpm = model.params.maxRpm ?? 0;
+  const high = chooseDescentGear(speedMs, ratios.slice(0, G), d, maxRpm);
+  if (ratios.length <= G || speedMs > model.params.lowRangeMaxSpeedMs + 1e-9) return high + 1;
+  const low = chooseDescentGear(speedMs, ratios.slice(G), d, maxRpm);
+  const lowRatio = ratios[G + low] as number;
+  const fits = engineRpm(speedMs, lowRatio, d) <= maxRpm;
+  return fits && lowRatio >= LOW_RANGE_GAIN * (ratios[high] as number) ? G + low + 1 : high + 1;
 }

@@ -51,6 +51,11 @@ export interface HeatTrace {
   fluidC: Float64Array[];
   /** Friction power at ONE wheel of each position over the step ending here, W. */
   brakePowerW: Float64Array[];
+  /**
+   * 1 where the brakes could not hold the held speed over the step ending here (the demand exceeded the
+   * faded brakes' capacity; docs/model.md, "Hold capacity"): every position's class there is runaway.
+   */
+  holdLost: Uint8Array;
   /** Step class per position (index into STEP_CLASSES). */
   stepClass: Uint8Array[];
   /** Worst step class over the positions. */
@@ -81,6 +86,7 @@ export function allocateTrace(profile: RouteProfile, positions: number): HeatTra
     rotorC: cols(),
     fluidC: cols(),
     brakePowerW: cols(),
+    holdLost: new Uint8Array(n),
     stepClass: Array.from({ length: positions }, () => new Uint8Array(n)),
     worstClass: new Uint8Array(n),
     energy: {

@@ -89,6 +89,7 @@ function validateEngine(e: Record<string, unknown>): void {
 /** @private */
 function validateTransmission(t: Record<string, unknown>): void {
   const p = "rig.vehicle.transmission";
+  if (t.lowRangeRatio !== undefined) requireBetween(t.lowRangeRatio, `${p}.lowRangeRatio`, 1.2, 5);
   if (t.preset !== undefined) {
     requireOneOf(t.preset, `${p}.preset`, PRESETS);
     return;

@@ -105,6 +105,8 @@ const RANGES: Readonly<Record<string, readonly [number, number]>> = {
   trailerGain: [0, 2],
   rotorPartition: [0, 1],
   brakeMassScale: [0.1, 5],
+  towBrakeCapacityMs2: [0.5, 15],
+  trailerBrakeCapacityMs2: [0.5, 15],
   ceilingDiscC: [100, 1200],
   ceilingDrumC: [100, 1200],
   cdaM2: [0, 20],
@@ -125,7 +127,7 @@ const RANGES: Readonly<Record<string, readonly [number, number]>> = {
 /** @private Parameters that must be > 0. */
 const POSITIVE = [
   "specificHeat", "lateralAccelMs2", "decelMs2", "accelMs2", "cruiseSpeedMs", "towingSpeedLimitMs", "maxRpm",
-  "fluidTimeConstantS",
+  "fluidTimeConstantS", "lowRangeMaxSpeedMs",
 ] as const;
 
 /** @private */
@@ -135,7 +137,7 @@ function validateParams(p: Record<string, unknown>, rig: Rig): void {
     if (p[k] !== undefined && p[k] !== null) requireBetween(p[k], at(k), min, max);
   }
   for (const k of POSITIVE) if (p[k] !== undefined && p[k] !== null) requirePositive(p[k], at(k));
-  for (const k of ["variableSpecificHeat", "startFromRest", "endAtRest"]) {
+  for (const k of ["variableSpecificHeat", "startFromRest", "endAtRest", "fadeFeedback"]) {
     if (p[k] !== undefined) requireBoolean(p[k], at(k));
   }
   if (p.descentSpeeds !== undefined) {
@@ -171,6 +173,7 @@ function validateThresholds(t: Record<string, unknown>): void {
 /** @private Number of gears of the rig's transmission. */
 function gearCount(rig: Rig): number {
   const t = rig.vehicle.transmission;
-  return "preset" in t ? GENERIC_TRANSMISSIONS[t.preset].gearRatios.length : t.gearRatios.length;
+  const high = "preset" in t ? GENERIC_TRANSMISSIONS[t.preset].gearRatios.length : t.gearRatios.length;
+  return t.lowRangeRatio === undefined ? high : 2 * high;
 }
 

@@ -36,6 +36,7 @@ const explicitTransmission = z
     gearRatios: z.array(num("gear ratio", 0.3, 8, "(ratio)")).min(1, "Enter at least one gear ratio.").max(12, "Enter at most 12 gears."),
     finalDrive: num("final-drive ratio", 1.5, 8, "(ratio)"),
     converterLocked: z.boolean().optional(),
+    lowRangeRatio: num("low-range ratio", 1.2, 5, "(ratio)").optional(),
   })
   .refine((t) => t.gearRatios.every((r, i) => i === 0 || r < t.gearRatios[i - 1]!), {
     message: "List the gear ratios from the lowest gear (largest ratio) to the highest.",
@@ -44,6 +45,7 @@ const explicitTransmission = z
 const presetTransmission = z.strictObject({
   preset: z.enum(["generic-6-speed-automatic", "generic-6-speed-manual"], { error: "Choose a generic transmission." }),
   converterLocked: z.boolean().optional(),
+  lowRangeRatio: num("low-range ratio", 1.2, 5, "(ratio)").optional(),
 });
 
 export const towVehicleSchema = z

@@ -5,6 +5,8 @@ import type { DbOrTx } from "@/db";
 import { heatRuns, planRigs, routes } from "@/db/schema";
 import { DEFAULT_ADVICE_SETTINGS } from "@/lib/advice";
 import { conditionsToOptions, type PlanConditions } from "@/lib/analysis/conditions";
+import type { Region } from "@/lib/compliance";
+import { findDescents } from "@/lib/route";
 import type { PlanJob, PlanJobResults, PlanRigResult } from "@/lib/analysis/plan-run";
 import { AppError } from "@/lib/errors";
 import { MODEL_VERSION, type HeatRunOptions, type Rig } from "@/lib/thermal";
@@ -36,6 +38,8 @@ export interface PlanRigRun {
   label: string;
   rigName: string;
   rig: Rig;
+  /** The rig's region, for its trailer-brake rule. */
+  region: Region;
   options: HeatRunOptions;
   inputsHash: string;
   /** The stored result for these inputs, or null (never computed, or an input changed since). */
@@ -54,8 +58,13 @@ export function planConditions(plan: Pick<PlanConditions, keyof PlanConditions>)
  * options, the model version and the advice engine's settings. Any change gives a new hash, so an old result
  * is never taken for the current one.
  */
-export function inputsHash(route: { id: string; contentSha256: string; trackId: string; stepM: number }, rig: Rig, options: HeatRunOptions): string {
-  const inputs = { model: MODEL_VERSION, advice: DEFAULT_ADVICE_SETTINGS, route, rig, options };
+export function inputsHash(
+  route: { id: string; contentSha256: string; trackId: string; stepM: number },
+  rig: Rig,
+  options: HeatRunOptions,
+  region: Region | null = null,
+): string {
+  const inputs = { model: MODEL_VERSION, advice: DEFAULT_ADVICE_SETTINGS, route, rig, options, region };
   return createHash("sha256").update(JSON.stringify(inputs)).digest("hex");
 }
 
@@ -75,8 +84,9 @@ export async function planRuns(db: DbOrTx, actor: Actor, planId: string) {
     label: c.label,
     rigName: c.rigName,
     rig: c.rig as Rig,
+    region: c.region as Region,
     options,
-    inputsHash: inputsHash(key, c.rig as Rig, options),
+    inputsHash: inputsHash(key, c.rig as Rig, options, c.region as Region),
   }));
   const stored = members.length
     ? await db
@@ -106,7 +116,11 @@ export async function computePlanRuns(db: DbOrTx, actor: Actor, planId: string, 
   const todo = runs.filter((r) => r.result === null && (!planRigIds || planRigIds.includes(r.planRigId)));
   if (todo.length === 0) return { computed: 0, plan, runs };
   const [route, profile] = await Promise.all([getRoute(db, actor, plan.routeId), getRouteProfile(db, actor, plan.routeId)]);
-  const job: PlanJob = { kind: "plan", profile, descents: route.descents, waypoints: route.waypoints.filter((w) => w.distanceM !== null), members: todo.map((r) => ({ rig: r.rig, options: r.options })) };
+  // Descents are found again on the stored profile, so every route gets the current model's descent rules.
+  const descents = findDescents(profile);
+  const waypoints = route.waypoints.filter((w) => w.distanceM !== null);
+  const members = todo.map((r) => ({ rig: r.rig, options: r.options, region: r.region }));
+  const job: PlanJob = { kind: "plan", profile, descents, waypoints, members };
   const results = await (execute ?? runInWorker)(job);
   const now = new Date();
   for (const [k, run] of todo.entries()) {

@@ -21,8 +21,9 @@ const range = { startM: descent.startDistanceM, endM: descent.endDistanceM };
 const inRange = (d: number) => d >= range.startM && d <= range.endM;
 
 describe("stretch controls", () => {
-  it("bumps the model version to 1.1.0 (changelog in constants.ts)", () => {
-    expect(MODEL_VERSION).toBe("fadeline-thermal 1.1.0");
+  it("carry the model version of the run (model 2 keeps stretch controls; changelog in constants.ts)", () => {
+    expect(MODEL_VERSION).toBe("fadeline-thermal 2.0.0");
+    expect(runHeatRun(profile, UTE_AND_CARAVAN, { controls: [{ ...range, gear: 2 }] }).modelVersion).toBe(MODEL_VERSION);
   });
 
   it("change nothing when absent or empty (same numbers as without)", () => {
@@ -79,7 +80,8 @@ describe("stretch controls", () => {
     expect(run("x")).toThrow(new TypeError("options.controls must be an array"));
     expect(run([{ startM: 10, endM: 10 }])).toThrow(new RangeError("options.controls[0].endM must be greater than options.controls[0].startM"));
     expect(run([{ startM: 0, endM: 10, speedMs: 0 }])).toThrow(new RangeError("options.controls[0].speedMs must be greater than 0"));
-    expect(run([{ startM: 0, endM: 10, gear: 7 }])).toThrow(new RangeError("options.controls[0].gear must be a whole number from 1 to 6"));
+    // six gears in high range and six in low range
+    expect(run([{ startM: 0, endM: 10, gear: 13 }])).toThrow(new RangeError("options.controls[0].gear must be a whole number from 1 to 12"));
     expect(run([{ startM: "a", endM: 10 }])).toThrow(new TypeError("options.controls[0].startM must be a number"));
   });
 });

@@ -37,6 +37,8 @@ export const SOLO_UTE: Rig = soloRig(2600);
 
 /** A silly rig: 4,500 kg on tiny solid discs and drums. Nothing should be enough on a long steep descent. */
 export const SILLY_RIG: Rig = soloRig(4500, {
+  // no low range: a two-wheel-drive truck (low range alone would hold this rig at a crawl)
+  transmission: { preset: "generic-6-speed-automatic" },
   gvmKg: 6000,
   gcmKg: 9000,
   frontBrakes: { kind: "solid-disc", diameterM: 0.25, massKg: 4 },

@@ -40,10 +40,11 @@ describe("Australia: ADR 38 / VSB 1 (ADR 38/05 [src]; national towing guide [2nd
   it("over 4,500 kg ATM is outside the light-trailer rules", () => {
     expect(verdict(4600, electric2, "AU")).toBe("outside-rule");
   });
-  it("keyed to GTM; where ATM would ask more, the verdict is unclear and says why", () => {
+  it("is judged on the ATM, the mass ADR 38/05 names, not the GTM: a 2,100 kg ATM override van fails at 1,950 kg GTM", () => {
     const check = checkTrailerBrakes(rigWithTrailer(2100, { ...override1, gtmKg: 1950 }), "AU")!;
-    expect(check.verdict).toBe("unclear");
-    expect(check.reasons.some((r) => r.startsWith("Some guides key this rule to ATM"))).toBe(true);
+    expect(check.massKg).toBe(2100);
+    expect(check.verdict).toBe("does-not-meet");
+    expect(check.problems).toContain("Override (surge) brakes do not meet this rule: brakes the driver can operate are required.");
   });
 });
 

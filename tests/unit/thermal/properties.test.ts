@@ -60,10 +60,10 @@ describe("monotonicity", () => {
     expect(peaks[1]!).toBeLessThan(peaks[2]!);
   });
 
-  it("front temperature rises with the held descent speed", () => {
+  it("front temperature rises with the held descent speed (fixed split: fade feedback moves heat between positions)", () => {
     const peaks = [40, 55, 70].map((kmh) =>
       peakFront(runHeatRun(profile, uteCaravanRig(5500), {
-        params: { ...STEADY, descentSpeeds: [{ minDescentGrade: 0.04, speedMs: kmhToMs(kmh) }] },
+        params: { ...STEADY, fadeFeedback: false, descentSpeeds: [{ minDescentGrade: 0.04, speedMs: kmhToMs(kmh) }] },
       })));
     expect(peaks[0]!).toBeLessThan(peaks[1]!);
     expect(peaks[1]!).toBeLessThan(peaks[2]!);
@@ -87,7 +87,7 @@ describe("monotonicity", () => {
 describe("step-size independence with constant inputs ([D] exact step composes exactly)", () => {
   const final = (stepM: number, emissivity: number): number => {
     const r = runHeatRun(constantGradeProfile(4000, -0.07, stepM), uteCaravanRig(5500), {
-      params: { ...STEADY, emissivity },
+      params: { ...STEADY, emissivity, fadeFeedback: false },
     });
     const col = r.trace.rotorC[0]!;
     return col[col.length - 1]!;

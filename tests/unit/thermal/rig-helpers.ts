@@ -5,9 +5,11 @@ import { MID_SIZE_UTE, TANDEM_AXLE_CARAVAN } from "@/lib/thermal";
 
 /**
  * Parameters that switch off everything except the brakes: no drag, no rolling resistance, no engine braking,
- * no rotating inertia, no cooling. The brakes then absorb exactly the mechanical energy released.
+ * no rotating inertia, no cooling, and the fixed heat split of model 1 (no fade feedback, which makes the split
+ * depend on temperature). The brakes then absorb exactly the mechanical energy released.
  */
 export const BARE: ModelParamsInput = {
+  fadeFeedback: false,
   cdaM2: 0,
   rollingResistance: 0,
   engineBrakingPowerW: 0,

@@ -61,8 +61,9 @@ describe("route profile and options", () => {
     expect(() => runHeatRun(profile, UTE_AND_CARAVAN, { params: { frontShare: 1.2 } })).toThrow(
       new RangeError("options.params.frontShare must be between 0 and 1"),
     );
-    expect(() => runHeatRun(profile, UTE_AND_CARAVAN, { params: { gearPolicy: { kind: "fixed", gear: 7 } } })).toThrow(
-      new RangeError("options.params.gearPolicy.gear must be a whole number from 1 to 6"),
+    expect(() => runHeatRun(profile, UTE_AND_CARAVAN, { params: { gearPolicy: { kind: "fixed", gear: 13 } } })).toThrow(
+      // six gears in high range and six in low range
+      new RangeError("options.params.gearPolicy.gear must be a whole number from 1 to 12"),
     );
     expect(() => runHeatRun(profile, UTE_AND_CARAVAN, { params: { padThresholds: { organic: { warmC: 300, hotC: 250 } } } })).toThrow(
       new RangeError("options.params.padThresholds.organic.hotC must not be less than options.params.padThresholds.organic.warmC"),
