@@ -40,6 +40,7 @@ export {
   type ThermalState,
 } from "./standstill";
 export { prepareRoute, type PreparedRoute } from "./prepare-route";
+export { sliceRoute, coarsenRoute } from "./route-pieces";
 export { controlColumns, type ControlColumns, type RangeControl } from "./range-controls";
 export { targetSpeeds, heldSpeeds, isDescentStep, fixedGearSpeedLimit } from "./speed-profile";
 export type { HeatTrace, StepEnergies } from "./trace";
