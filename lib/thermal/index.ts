@@ -63,3 +63,22 @@ export {
 } from "./summary";
 export { validateRig } from "./validate-rig";
 export { validateRouteProfile, validateHeatRunOptions } from "./validate-run";
+export {
+  BAND_BRAKE_MASS,
+  BAND_COOLING_FACTOR,
+  BAND_ENGINE_BRAKING,
+  BAND_FRONT_SHARE,
+  BAND_RANGES,
+  BAND_ROTOR_PARTITION,
+  BAND_TRAILER_GAIN,
+  DEFAULT_BAND_SETTINGS,
+  bandMemberParams,
+  latinHypercube,
+  peakBand,
+  runBand,
+  type BandParameter,
+  type BandRange,
+  type BandSettings,
+  type HeatBand,
+  type PeakBand,
+} from "./ensemble";
