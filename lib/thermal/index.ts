@@ -82,3 +82,13 @@ export {
   type HeatBand,
   type PeakBand,
 } from "./ensemble";
+export {
+  calibrate,
+  DEFAULT_CALIBRATION_SETTINGS,
+  type BrakeReading,
+  type CalibratedParameter,
+  type CalibratedReading,
+  type CalibrationResult,
+  type CalibrationSettings,
+  type FlaggedReading,
+} from "./calibrate";
