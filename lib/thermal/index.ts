@@ -41,6 +41,7 @@ export {
   type ThermalState,
 } from "./standstill";
 export { prepareRoute, type PreparedRoute } from "./prepare-route";
+export { sliceRoute, coarsenRoute } from "./route-pieces";
 export { controlColumns, type ControlColumns, type RangeControl } from "./range-controls";
 export { targetSpeeds, heldSpeeds, isDescentStep, fixedGearSpeedLimit, descentGear, GRADE_SLACK } from "./speed-profile";
 export type { HeatTrace, StepEnergies } from "./trace";
@@ -63,3 +64,32 @@ export {
 } from "./summary";
 export { validateRig } from "./validate-rig";
 export { validateRouteProfile, validateHeatRunOptions } from "./validate-run";
+export {
+  BAND_BRAKE_MASS,
+  BAND_COOLING_FACTOR,
+  BAND_ENGINE_BRAKING,
+  BAND_FRONT_SHARE,
+  BAND_RANGES,
+  BAND_ROTOR_PARTITION,
+  BAND_TRAILER_GAIN,
+  DEFAULT_BAND_SETTINGS,
+  bandMemberParams,
+  latinHypercube,
+  peakBand,
+  runBand,
+  type BandParameter,
+  type BandRange,
+  type BandSettings,
+  type HeatBand,
+  type PeakBand,
+} from "./ensemble";
+export {
+  calibrate,
+  DEFAULT_CALIBRATION_SETTINGS,
+  type BrakeReading,
+  type CalibratedParameter,
+  type CalibratedReading,
+  type CalibrationResult,
+  type CalibrationSettings,
+  type FlaggedReading,
+} from "./calibrate";
