@@ -11,7 +11,7 @@
  */
 import { readFileSync } from "node:fs";
 import { parseArgs } from "node:util";
-import { adviseRig, renderRigAdvice } from "../lib/advice";
+import { withBands, adviseRig, renderRigAdvice } from "../lib/advice";
 import { adviceReport, summarizeAnalysis, type AnalysisResult, type PeakReport } from "../lib/analysis/analyze";
 import { RIG_PRESETS } from "../lib/analysis/presets";
 import { placeWaypoints, processGpx } from "../lib/route";
@@ -132,7 +132,7 @@ function modelError(error: unknown): never {
   fail(`the model cannot run with these inputs: ${message}`);
 }
 
-const prepared = prepareRoute(route.profile);
+const prepared = prepareRoute(route.profile, route.descents);
 let options: HeatRunOptions = Object.keys(settings).length ? { params: settings } : {};
 let calibration: CalibrationResult | null = null;
 let output: AnalysisResult & { calibration?: CalibrationResult; advice?: ReturnType<typeof adviceReport> };
@@ -149,7 +149,8 @@ try {
   if (calibration) output.calibration = calibration;
   if (values.advice) {
     const waypoints = placeWaypoints(route.profile, route.gpx.waypoints);
-    const advice = adviseRig({ route: prepared, descents: route.descents, rig, options, waypoints, asPlanned: nominal });
+    const raw = adviseRig({ route: prepared, descents: route.descents, rig, options, waypoints, asPlanned: nominal, region: "AU" });
+    const { advice } = withBands(prepared, route.descents, rig, options, raw, nominal);
     output.advice = adviceReport(advice);
     adviceText = renderRigAdvice(advice, "metric");
   }

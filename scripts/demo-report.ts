@@ -5,10 +5,11 @@
  */
 import { readFileSync } from "node:fs";
 import { join } from "node:path";
-import { adviseRig, renderRigAdvice } from "../lib/advice";
+import { adviseRig, renderRigAdvice, withBands } from "../lib/advice";
 import { conditionsToOptions, type PlanConditions } from "../lib/analysis/conditions";
 import { placeWaypoints, processGpx } from "../lib/route";
-import { prepareRoute } from "../lib/thermal";
+import { prepareRoute, runPrepared } from "../lib/thermal";
+import { formatTemperatureBand } from "../lib/units";
 import { DEMO_OWNER_RIGS, DEMO_TEAM_RIGS, type DemoRig } from "../db/demo/rigs";
 
 const DIR = join(__dirname, "../tests/fixtures/gpx/demo");
@@ -31,12 +32,15 @@ for (const plan of PLANS) {
   console.log(`\n=== ${plan.name} (${plan.file}, ${descents.length} descents, ${plan.conditions.ambientC} °C)`);
   for (const member of plan.rigs) {
     const started = performance.now();
-    const advice = adviseRig({ route, descents, rig: member.rig, options, waypoints, region: "AU" });
+    const raw = adviseRig({ route, descents, rig: member.rig, options, waypoints, region: "AU" });
+    const { advice } = withBands(route, descents, member.rig, options, raw, runPrepared(route, member.rig, options));
     console.log(`\n--- ${member.name} (${(performance.now() - started).toFixed(0)} ms)`);
     for (const p of advice.proof) {
       const d = descents[p.descentIndex]!;
-      const peaks = (o: typeof p.asPlanned) => o.positions.map((q) => `${q.position} ${q.peakC >= q.ceilingC ? "beyond" : q.peakC.toFixed(0)}`).join(" ");
-      console.log(`  descent ${p.descentIndex + 1} ${(d.startDistanceM / 1000).toFixed(1)}–${(d.endDistanceM / 1000).toFixed(1)} km, ${d.dropM.toFixed(0)} m, ${(d.meanGrade * 100).toFixed(1)} %: as planned ${p.asPlanned.worstClass} (${peaks(p.asPlanned)}); with advice ${p.withAdvice.worstClass} (${peaks(p.withAdvice)})`);
+      const peaks = (o: typeof p.asPlanned, band: { lowC: number; highC: number }[] | undefined) =>
+        o.positions.map((q, j) => `${q.position} ${formatTemperatureBand(q.peakC, band?.[j] ?? null, q.ceilingC, system)}`).join(", ");
+      const where = `${(d.startDistanceM / 1000).toFixed(1)}–${(d.endDistanceM / 1000).toFixed(1)} km, ${d.dropM.toFixed(0)} m, ${(d.meanGrade * 100).toFixed(1)} %`;
+      console.log(`  descent ${p.descentIndex + 1} ${where}: as planned ${p.asPlanned.worstClass} (${peaks(p.asPlanned, p.band?.asPlanned)}); with advice ${p.withAdvice.worstClass} (${peaks(p.withAdvice, p.band?.withAdvice)})`);
     }
     if (advice.legalReasons.length > 0) console.log(`  law: ${advice.legalReasons.join(" | ")}`);
     for (const line of renderRigAdvice(advice, system)) console.log(`  ${line}`);

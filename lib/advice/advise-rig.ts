@@ -109,6 +109,7 @@ export function adviseRig(input: AdviseRigInput): RigAdvice {
     worstClass,
     verdict: legal.length > 0 ? "not advised" : traceVerdict(rigVerdict(advice, flagged.length > 0), worstClass),
     legalReasons: legal,
+    uncertainty: [],
     waypoints,
     modelVersion: asPlanned.modelVersion,
   };

@@ -4,8 +4,17 @@
  */
 
 import type { StepClass } from "@/lib/thermal";
-import { formatDistance, formatElevation, formatSpeed, formatTemperature, M_PER_MI, type UnitSystem } from "@/lib/units";
-import type { PlannedStop, RunOutcome, StopPlace } from "./types";
+import {
+  BEYOND_RANGE_TEXT,
+  formatDistance,
+  formatElevation,
+  formatSpeed,
+  formatTemperature,
+  formatTemperatureBand,
+  M_PER_MI,
+  type UnitSystem,
+} from "@/lib/units";
+import type { BandEdges, PlannedStop, RunOutcome, StopPlace } from "./types";
 
 /** The step classes in the words of the plan page (issue 5 §3). */
 export const CLASS_WORDS: Readonly<Record<StepClass, string>> = {
@@ -67,18 +76,20 @@ export function minutesText(s: number): string {
  * @param outcome a run's outcome
  * @param system unit system
  * @param trailerNoun word for the trailer ("caravan", "trailer")
+ * @param band each position's band, when run: peaks then read "about 240 °C (210–290)"
  * @returns e.g. "front 240 °C, rear 210 °C, caravan 180 °C: below caution"
  * @example outcomeText(outcome, "metric", "caravan")
  */
-export function outcomeText(outcome: RunOutcome, system: UnitSystem, trailerNoun: string): string {
+export function outcomeText(outcome: RunOutcome, system: UnitSystem, trailerNoun: string, band?: readonly BandEdges[]): string {
   const peaks = outcome.positions
-    .map((p) => `${p.position === "trailer" ? trailerNoun : p.position} ${peakText(p.peakC, p.ceilingC, system)}`)
+    .map((p, j) => {
+      const edges = band?.[j];
+      const value = edges ? formatTemperatureBand(p.peakC, edges, p.ceilingC, system) : peakText(p.peakC, p.ceilingC, system);
+      return `${p.position === "trailer" ? trailerNoun : p.position} ${value}`;
+    })
     .join(", ");
   return `${peaks}: ${CLASS_WORDS[outcome.worstClass]}`;
 }
-
-/** What Fadeline prints instead of a temperature past a brake's validity ceiling (docs/model.md). */
-export const BEYOND_RANGE_TEXT = "beyond Fadeline's range";
 
 /**
  * A peak temperature in words: the temperature, or "beyond Fadeline's range" at or past the brake's validity

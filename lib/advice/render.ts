@@ -4,11 +4,11 @@
  * Camp (36.2 km)." Every piece of advice ends with its re-run result ("With this advice: front 240 °C, …").
  */
 
-import { formatDistance, formatGrade, formatElevation, type UnitSystem } from "@/lib/units";
+import { formatDistance, formatGrade, formatElevation, formatTemperature, formatTemperatureBand, type UnitSystem } from "@/lib/units";
 import { GENERAL_CAUTIONS, NOTHING_IS_ENOUGH_OPTIONS, STANDSTILL_CAUTIONS } from "./cautions";
 import { at, CLASS_WORDS, gearText, lengthText, minutesText, outcomeText, speedLimitText, stopPlaceText } from "./render-parts";
 import { trailerNoteText } from "./render-trailer";
-import type { DescentAdvice, PlannedStop, RigAdvice } from "./types";
+import type { BandNote, DescentAdvice, PlannedStop, RigAdvice } from "./types";
 
 /** A descent's advice as text. */
 export interface DescentText {
@@ -38,7 +38,8 @@ export function renderDescentAdvice(advice: DescentAdvice, system: UnitSystem, o
   const noun = options.trailerNoun ?? "caravan";
   const d = advice.descent;
   const result = (o: Parameters<typeof outcomeText>[0]) => outcomeText(o, system, noun);
-  const lines = [planLine(advice, system, noun), `As planned: ${result(advice.baseline)}.`];
+  const asPlanned = outcomeText(advice.baseline, system, noun, advice.bands?.asPlanned);
+  const lines = [planLine(advice, system, noun), `As planned: ${asPlanned}.`];
   lines.push(gearLine(advice, system, result), speedLine(advice, system, result));
   if (advice.stop) lines.push(stopLine(advice.stop.stops, advice.stop.enough, system, result(advice.stop.outcome)));
   for (const note of advice.trailer?.notes ?? []) lines.push(trailerNoteText(note, advice.trailer!, system, noun, result));
@@ -60,7 +61,8 @@ export function renderDescentAdvice(advice: DescentAdvice, system: UnitSystem, o
  * @example renderRigAdvice(advice, "imperial").join("\n")
  */
 export function renderRigAdvice(advice: RigAdvice, system: UnitSystem, options: RenderOptions = {}): string[] {
-  const out = [`Verdict: ${advice.verdict}.`];
+  const out = [`Verdict: ${advice.verdict}.`, ...advice.legalReasons.map((r) => `Not advised as loaded: ${r}`)];
+  for (const note of advice.uncertainty) out.push(bandNoteText(note, system, options.trailerNoun ?? "caravan"));
   for (const d of advice.descents) {
     const text = renderDescentAdvice(d, system, options);
     out.push("", text.title, ...text.lines, ...text.cautions);
@@ -70,10 +72,27 @@ export function renderRigAdvice(advice: RigAdvice, system: UnitSystem, options: 
   return out;
 }
 
+/**
+ * A band note in words: "Could reach fade on descent 2 within the model's uncertainty: caravan up to about
+ * 290 °C (its line is 260 °C)."
+ * @param note the note
+ * @param system unit system
+ * @param noun word for the trailer
+ * @returns the sentence
+ * @example bandNoteText({ descentIndex: 1, line: "hot", hits }, "metric", "caravan")
+ */
+export function bandNoteText(note: BandNote, system: UnitSystem, noun: string): string {
+  const what = note.line === "hot" ? "fade" : "caution";
+  const hits = note.hits
+    .map((h) => `${h.position === "trailer" ? noun : h.position} up to about ${formatTemperatureBand(h.highC, null, Infinity, system)} (its line is ${formatTemperature(h.limitC, system)})`)
+    .join(", ");
+  return `Could reach ${what} on descent ${note.descentIndex + 1} within the model's uncertainty: ${hits}.`;
+}
+
 /** @private The combined plan as one sentence, with its result. */
 function planLine(a: DescentAdvice, system: UnitSystem, noun: string): string {
   const { plan } = a.plan;
-  const result = outcomeText(a.plan.outcome, system, noun);
+  const result = outcomeText(a.plan.outcome, system, noun, a.bands?.withAdvice);
   if (a.nothingIsEnough) {
     const pace = plan.speedMs === undefined ? "walking pace" : speedLimitText(plan.speedMs, system);
     return `Nothing we can suggest keeps these brakes out of the fade range on this descent: even the gentlest plan ` +

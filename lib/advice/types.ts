@@ -184,16 +184,44 @@ export interface DescentAdvice {
   walkingPace: RunOutcome;
   /** Best combination, proven in the whole-route run. */
   plan: CombinedPlan;
+  /** Each position's band as planned and with the plan, once bands are run (withBands). */
+  bands?: { asPlanned: BandEdges[]; withAdvice: BandEdges[] };
   /** Stopping distance at the bottom: as planned, and with the combined plan. */
   stopping: { asPlanned: HotColdStop[]; withPlan: HotColdStop[] };
+}
+
+/** A band edge pair, °C (10th and 90th percentile of the ensemble; lib/thermal runBand). */
+export interface BandEdges {
+  lowC: number;
+  highC: number;
+}
+
+/** A descent whose band straddles a line with the advice applied: "could reach fade on descent 2". */
+export interface BandNote {
+  /** Index into the route's descents. */
+  descentIndex: number;
+  /** The line the band's upper edge reaches while the nominal stays below it. */
+  line: AdviceLine;
+  /** Each brake that could reach it: its upper edge and its line, °C. */
+  hits: { position: BrakePosition; highC: number; limitC: number }[];
 }
 
 /** Advice for one rig over a route. */
 export interface RigAdvice {
   /** Descents that need advice (reach warm or worse), in route order. */
   descents: DescentAdvice[];
-  /** Every descent of the route with its class as planned and with all advice applied (the proof). */
-  proof: { descentIndex: number; asPlanned: RunOutcome; withAdvice: RunOutcome }[];
+  /**
+   * Every descent of the route with its class as planned and with all advice applied (the proof), and, once
+   * bands are run (withBands), each position's band as planned and with the advice.
+   */
+  proof: {
+    descentIndex: number;
+    asPlanned: RunOutcome;
+    withAdvice: RunOutcome;
+    band?: { asPlanned: BandEdges[]; withAdvice: BandEdges[] };
+  }[];
+  /** Lines the bands straddle with the advice applied (empty before bands are run). */
+  uncertainty: BandNote[];
   /** Worst class over the whole route as planned and with all advice applied. */
   worstClass: { asPlanned: StepClass; withAdvice: StepClass };
   /** Verdict for this rig (see convoy.ts for the rule). */

@@ -39,6 +39,33 @@ export function formatTemperature(c: number, system: UnitSystem): string {
   return system === "metric" ? `${fmt(c, 0)} °C` : `${fmt((c * 9) / 5 + 32, 0)} °F`;
 }
 
+/** What is shown instead of a temperature at or past a brake's validity ceiling (docs/model.md). */
+export const BEYOND_RANGE_TEXT = "beyond Fadeline's range";
+
+/**
+ * A modelled temperature with its uncertainty band, rounded to tens: "about 240 °C (210–290)". At or past the
+ * validity ceiling the number is not shown ("beyond Fadeline's range"); a band edge past it reads "beyond".
+ * @param c the temperature, °C
+ * @param band its band edges, °C (null: no band)
+ * @param ceilingC the brake's validity ceiling, °C
+ * @param system unit system
+ * @returns the text
+ * @example formatTemperatureBand(243, { lowC: 212, highC: 288 }, 600, "metric") // "about 240 °C (210–290)"
+ */
+export function formatTemperatureBand(
+  c: number,
+  band: { lowC: number; highC: number } | null,
+  ceilingC: number,
+  system: UnitSystem,
+): string {
+  if (c >= ceilingC) return BEYOND_RANGE_TEXT;
+  const shown = (x: number) => Math.round((system === "metric" ? x : (x * 9) / 5 + 32) / 10) * 10;
+  const unit = system === "metric" ? "°C" : "°F";
+  if (band === null) return `${fmt(shown(c), 0)} ${unit}`;
+  const high = band.highC >= ceilingC ? "beyond" : fmt(shown(band.highC), 0);
+  return `about ${fmt(shown(c), 0)} ${unit} (${fmt(shown(band.lowC), 0)}–${high})`;
+}
+
 /** A mass given in kg: kg or lb. */
 export function formatMass(kg: number, system: UnitSystem): string {
   return system === "metric" ? `${fmt(kg, 0)} kg` : `${fmt(kg / KG_PER_LB, 0)} lb`;
