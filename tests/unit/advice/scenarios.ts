@@ -88,3 +88,41 @@ export function twoDescents(): TwoDescents {
   if (descents.length !== 2) throw new Error(`expected two descents, found ${descents.length}`);
   return { profile, descents };
 }
+
+/**
+ * 3 km flat, 10 % down for 1 km, a 300 m bench at 2 % down (a place a rig can stand), 10 % down for 800 m,
+ * 3 km flat (10 m steps): one descent of 210 m, crest at 3.0 km, bench from 4.0 to 4.3 km, bottom at 5.1 km.
+ * @returns the route with its single descent
+ */
+export function benchDescent(): OneDescent {
+  const profile = stretchesProfile([
+    { lengthM: 3000, grade: 0 },
+    { lengthM: 1000, grade: -0.1 },
+    { lengthM: 300, grade: -0.02 },
+    { lengthM: 800, grade: -0.1 },
+    { lengthM: 3000, grade: 0 },
+  ]);
+  const descents = findDescents(profile);
+  if (descents.length !== 1) throw new Error(`expected one descent, found ${descents.length}`);
+  return { profile, descents, descent: descents[0]! };
+}
+
+/**
+ * Mean grade of a profile over ±halfWidthM around a distance, from its elevations (rise over run): the grade
+ * a rig parked there stands on, computed here independently of lib/advice.
+ * @param profile the route profile
+ * @param atM distance, m
+ * @param halfWidthM half the parking stretch, m
+ * @returns grade (negative downhill)
+ */
+export function gradeAround(profile: RouteProfile, atM: number, halfWidthM = 50): number {
+  const d = profile.distanceM;
+  const nearest = (m: number) => {
+    let best = 0;
+    for (let i = 0; i < d.length; i++) if (Math.abs(d[i]! - m) < Math.abs(d[best]! - m)) best = i;
+    return best;
+  };
+  const a = nearest(atM - halfWidthM);
+  const b = nearest(atM + halfWidthM);
+  return (profile.elevationM[b]! - profile.elevationM[a]!) / (d[b]! - d[a]!);
+}
