@@ -28,7 +28,7 @@ import { isBelow, outcomeOf } from "./outcome";
 import { routePieces } from "./route-window";
 import { DEFAULT_ADVICE_SETTINGS, type AdviceSettings } from "./settings";
 import { nearestIndex } from "./stop-place";
-import type { DescentAdvice, RigAdvice, RunOutcome } from "./types";
+import type { DescentAdvice, PlanStatus, RigAdvice, RunOutcome } from "./types";
 import { rigVerdict } from "./verdict";
 
 /** Input of {@link adviseRig}. */
@@ -97,11 +97,12 @@ export function adviseRig(input: AdviseRigInput): RigAdvice {
     asPlanned: planned[i]!,
     withAdvice: outcomeOf(pieceFor(pieces, d.startIndex).result, d.startDistanceM, d.endDistanceM),
   }));
+  const worstClass = { asPlanned: worstOf([{ startIndex: 0, result: asPlanned }]), withAdvice: worstOf(pieces) };
   return {
     descents: advice,
     proof,
-    worstClass: { asPlanned: worstOf([{ startIndex: 0, result: asPlanned }]), withAdvice: worstOf(pieces) },
-    verdict: rigVerdict(advice, flagged.length > 0),
+    worstClass,
+    verdict: rigVerdict(advice, flagged.length > 0, worstClass.withAdvice),
     waypoints,
     modelVersion: asPlanned.modelVersion,
   };
@@ -157,7 +158,7 @@ function finishAdvice(
     plan: {
       plan: draft.plan,
       stops: draft.planStops,
-      status: isBelow(outcome, "warm") ? "below-warm" : isBelow(outcome, "hot") ? "below-hot" : "above-hot",
+      status: planStatus(outcome),
       outcome,
     },
     stopping: {
@@ -165,6 +166,17 @@ function finishAdvice(
       withPlan: hotColdStops(model, ends(outcome)),
     },
   };
+}
+
+/**
+ * Where a plan's outcome keeps the brakes: below warm, below hot, or not below hot (fluid boil risk and runaway
+ * count as not below hot, whatever the temperatures).
+ * @param outcome the plan's re-run on the descent
+ * @returns the status
+ * @example planStatus(outcome) // "below-hot"
+ */
+export function planStatus(outcome: RunOutcome): PlanStatus {
+  return isBelow(outcome, "warm") ? "below-warm" : isBelow(outcome, "hot") ? "below-hot" : "above-hot";
 }
 
 /** @private Brake state at a trace sample. */
