@@ -27,6 +27,7 @@ import { descentRunner, planOptions, runPlan, type DescentRunner } from "./desce
 import { isBelow, outcomeOf } from "./outcome";
 import { routePieces } from "./route-window";
 import { DEFAULT_ADVICE_SETTINGS, type AdviceSettings } from "./settings";
+import { shortfallOf } from "./shortfall";
 import { nearestIndex } from "./stop-place";
 import type { DescentAdvice, PlanStatus, RigAdvice, RunOutcome } from "./types";
 import { rigVerdict } from "./verdict";
@@ -154,6 +155,7 @@ function finishAdvice(
     stop: draft.stop,
     trailer: draft.trailer,
     nothingIsEnough: draft.nothingIsEnough,
+    shortfall: isBelow(outcome, "hot") ? null : shortfallOf(outcome, model, draft.trailer),
     walkingPace: draft.walkingPace,
     plan: {
       plan: draft.plan,

@@ -14,6 +14,7 @@ export { rigVerdict, worstVerdict, VERDICTS } from "./verdict";
 export { adviceOptions, proveAdvice } from "./prove";
 export { compareBrakeSetups, withBrakeSetup, type BrakeComparisonRow, type BrakeSetup, type SetupFigures } from "./compare-brakes";
 export { stopDuration, stopTargets } from "./stop-plan";
+export { shortfallOf } from "./shortfall";
 export { outcomeOf, marginTo, isBelow } from "./outcome";
 export { renderDescentAdvice, renderRigAdvice, distanceText, type DescentText, type RenderOptions } from "./render";
 export { renderConvoy } from "./render-convoy";
