@@ -22,10 +22,3 @@ export const STANDSTILL_CAUTIONS: readonly string[] = [
   "Don't set the park brake on very hot drums, as they can bind: chock the wheels and leave it in gear or Park.",
   "Don't pour water on hot brakes.",
 ];
-
-/** What to consider when nothing is enough. */
-export const NOTHING_IS_ENOUGH_OPTIONS: readonly string[] = [
-  "choose a different route",
-  "carry less load",
-  "have a brake upgrade assessed by a licensed mechanic",
-];

@@ -18,5 +18,5 @@ export { shortfallOf } from "./shortfall";
 export { outcomeOf, marginTo, isBelow } from "./outcome";
 export { renderDescentAdvice, renderRigAdvice, distanceText, type DescentText, type RenderOptions } from "./render";
 export { renderConvoy } from "./render-convoy";
-export { CLASS_WORDS, ordinal, speedLimitText } from "./render-parts";
-export { GENERAL_CAUTIONS, STANDSTILL_CAUTIONS, NOTHING_IS_ENOUGH_OPTIONS } from "./cautions";
+export { CLASS_WORDS, ordinal, speedLimitText, shortfallText, stopText, stopsAddText } from "./render-parts";
+export { GENERAL_CAUTIONS, STANDSTILL_CAUTIONS } from "./cautions";
