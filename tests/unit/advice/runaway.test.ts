@@ -6,10 +6,10 @@
  */
 
 import { describe, expect, it } from "vitest";
-import { adviseRig, CLASS_WORDS, isBelow, rigVerdict, type RunOutcome } from "@/lib/advice";
+import { adviseRig, CLASS_WORDS, isBelow, renderDescentAdvice, rigVerdict, type RunOutcome } from "@/lib/advice";
 import { classRank } from "@/lib/advice/outcome";
 import { STEP_CLASSES } from "@/lib/thermal";
-import { benchDescent, oneDescent, SILLY_RIG, UTE_VAN } from "./scenarios";
+import { benchDescent, oneDescent, SILLY_RIG, SOLO_UTE, UTE_VAN } from "./scenarios";
 
 const bench = benchDescent();
 const fine = adviseRig({ route: bench.profile, descents: bench.descents, rig: UTE_VAN });
@@ -44,5 +44,17 @@ describe("runaway", () => {
     expect(advice.worstClass.asPlanned).toBe("runaway");
     expect(advice.descents[0]!.baseline.worstClass).toBe("runaway");
     expect(advice.verdict).toBe("not advised");
+  });
+
+  it("as planned, is never 'clear', and the advice says the brakes may fail there even when the plan saves it", () => {
+    const route = oneDescent(-0.12, 8000);
+    const advice = adviseRig({ route: route.profile, descents: route.descents, rig: SOLO_UTE });
+    const a = advice.descents[0]!;
+    expect(a.baseline.worstClass).toBe("runaway");
+    expect(a.plan.status).not.toBe("above-hot"); // the plan keeps the brakes below the fade-likely line
+    expect(advice.verdict).toBe("clear with advice");
+    const [plan, asPlanned] = renderDescentAdvice(a, "metric").lines;
+    expect(plan).toContain("As planned, the brakes may fail on this descent");
+    expect(asPlanned).toContain(CLASS_WORDS.runaway);
   });
 });
