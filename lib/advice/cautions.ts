@@ -1,5 +1,5 @@
 /**
- * Cautions in our own words (after trade-facts.md §6). They go with every printed or shown piece of advice (issue 5 §9), and the
+ * Cautions in our own words (after trade-facts.md §6). They go with every printed or shown piece of advice, and the
  * standstill cautions with every cool-down stop (trade-facts.md §3.2). The infrared-thermometer check is
  * common practice (trade-facts.md §5, item 5: forum answers), not a published rule.
  */

@@ -1,5 +1,5 @@
 /**
- * Structured advice for a rig on a route (issue 5 §4). Numbers in SI (m, s, m/s), temperatures in °C. Every
+ * Structured advice for a rig on a route. Numbers in SI (m, s, m/s), temperatures in °C. Every
  * piece of advice carries the result of re-running the model with it applied.
  */
 
