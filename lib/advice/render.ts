@@ -9,6 +9,7 @@
 
 import { formatDistance, formatGrade, formatElevation, type UnitSystem } from "@/lib/units";
 import { GENERAL_CAUTIONS, STANDSTILL_CAUTIONS } from "./cautions";
+import { DEFAULT_ADVICE_SETTINGS } from "./settings";
 import {
   at,
   CLASS_WORDS,
@@ -138,9 +139,11 @@ function speedLine(a: DescentAdvice, system: UnitSystem, result: (o: DescentAdvi
     `${faster} faster is not enough. With this advice: ${result(s.outcome)}.`;
 }
 
-/** Where a cool-down stop is made, in words (stop-place.ts). */
-const STOP_RULE =
-  "A stop is made where a rig can stand (the crest, a named waypoint, or road no steeper than 4 %), as late as it can be before the brakes would pass the line.";
+/** The places a rig can stand for a cool-down stop, in words (stop-place.ts, with the default stop grade). */
+const STAND_PLACES = `the crest, a named waypoint, or road no steeper than ${Math.round(DEFAULT_ADVICE_SETTINGS.maxStopGrade * 100)} %`;
+
+/** Where a cool-down stop is made, in words. */
+const STOP_RULE = `A stop is made where a rig can stand (${STAND_PLACES}), as late as it can be before the brakes would pass the line.`;
 
 /**
  * @private The cool-down stop line: the plan's own stops when it has any (the same words as the plan line),
@@ -158,7 +161,7 @@ function stopLine(a: DescentAdvice, system: UnitSystem, result: (o: DescentAdvic
   if (a.stop === null) return null;
   if (a.stop.stops.length === 0) {
     if (a.plan.status !== "above-hot") return null;
-    return "Cool-down stop: none would help. There is no place a rig can stand (the crest, a named waypoint, or road no steeper than 4 %) before the brakes would pass the fade-likely line where a stop would cool them.";
+    return `Cool-down stop: none would help. There is no place a rig can stand (${STAND_PLACES}) before the brakes would pass the fade-likely line where a stop would cool them.`;
   }
   const tail = a.stop.enough ? "" : " Even with these stops the brakes get too hot; use the plan above.";
   return `Cool-down stop, instead of the plan above (driving as planned): ${each(a.stop.stops)}; ${stopsAddText(a.stop.stops)}. ${STOP_RULE} With these stops: ${result(a.stop.outcome)}.${tail}`;
