@@ -1,6 +1,7 @@
 /**
- * Advice for one descent (issue 5 §4): gear, speed, cool-down stops, trailer brakes, "nothing is enough", and
- * the combined plan. The combined plan follows one rule, in order:
+ * Advice for one descent: gear, speed, cool-down stops, trailer brakes, whether anything is enough, and the
+ * combined plan. The combined plan follows the order in which an experienced driver reaches for them (common
+ * practice, no published source: gear and speed first, then one cool-down stop, then a second):
  * 1. the gear advice if there is one (hold that gear; the speed it allows is stated, not imposed: in the model a
  *    lower speed in the same gear can heat the brakes more, the engine braking less at lower rpm);
  * 2. else the speed advice: the fastest 5 km/h step, in the lowest gear that reaches it within the rpm limit,
@@ -8,16 +9,18 @@
  * 3. else, when some gear (held) or speed step (in its gear, held) keeps them below the hot line, the one that
  *    keeps them furthest below it (the brakes will be in the caution range, so the most margin wins over
  *    speed), with cool-down stops added if they bring it below the warm line;
- * 4. else cool-down stops: the stop advice as planned if it keeps every brake below the hot line, else stops on
- *    top of the coolest gear and speed;
+ * 4. else cool-down stops on top of the coolest gear and speed, else driving as planned with stops, if they
+ *    keep every brake below the hot line; stops are only where a rig can stand, one first and two at most, each
+ *    at most 30 minutes (stop-plan.ts, stop-place.ts);
  * 5. else nothing is enough: no gear (held), no speed from walking pace up (in its lowest gear, held) and no
  *    stops keep every brake below the hot line and the fluid below boil risk. The plan is then the coolest of
- *    those gears and speeds, and the advice says plainly that it is not enough.
- * Gear and speed come first because a rig that keeps rolling cools faster than a parked one
- * (thermal-model.md §1.4); stops are added only when gear and speed alone leave the brakes warm.
- * "Nothing is enough" covers every speed step, not only walking pace: below the engine's useful rpm engine
- * braking fades, so in the model walking pace is not always the gentlest way down; and a stop can rescue a
- * descent that no gear or speed can (at the crest, when the rig arrives hot).
+ *    those gears and speeds, and the advice says plainly that it is not enough, why (which brake, how far past
+ *    which line) and what would change it (shortfall.ts).
+ * Gear and speed come first because a rig that keeps rolling cools faster than a parked one (docs/model.md);
+ * stops are added only when gear and speed alone leave the brakes too warm. "Nothing is enough" covers every
+ * speed step, not only walking pace: below the engine's useful rpm engine braking fades, so in the model
+ * walking pace is not always the gentlest way down; and a stop can rescue a descent that no gear or speed can
+ * (at the crest, when the rig arrives hot).
  */
 
 import type { PlacedWaypoint } from "@/lib/route";
@@ -119,7 +122,7 @@ function rankCoolest(runner: DescentRunner, candidates: readonly DrivePlan[]): D
   return [...candidates].sort((a, b) => (margin.get(b) as number) - (margin.get(a) as number));
 }
 
-/** @private Steps 4–5 of the rule: cool-down stops, else nothing is enough (the coolest gear and speed). */
+/** @private Steps 4–5 of the rule: stops on the coolest gear and speed, else stops as planned, else nothing is enough. */
 function lastResort(
   route: PreparedRoute,
   runner: DescentRunner,
@@ -127,13 +130,13 @@ function lastResort(
   combos: readonly DrivePlan[],
   waypoints: readonly PlacedWaypoint[],
 ): { plan: DrivePlan; stops: PlannedStop[]; nothingIsEnough: boolean } {
-  if (stop !== null && stop.enough && stop.stops.length > 0) {
-    return { plan: { stops: stop.stops.map(stripStop) }, stops: stop.stops, nothingIsEnough: false };
-  }
   const coolest = rankCoolest(runner, combos)[0]!;
   const withStops = exploreStops(route, runner, coolest, "hot", waypoints);
   if (withStops !== null) {
     return { plan: { ...coolest, stops: withStops.stops.map(stripStop) }, stops: withStops.stops, nothingIsEnough: false };
+  }
+  if (stop !== null && stop.enough && stop.stops.length > 0) {
+    return { plan: { stops: stop.stops.map(stripStop) }, stops: stop.stops, nothingIsEnough: false };
   }
   return { plan: coolest, stops: [], nothingIsEnough: true };
 }

@@ -27,8 +27,9 @@ import { descentRunner, planOptions, runPlan, type DescentRunner } from "./desce
 import { isBelow, outcomeOf } from "./outcome";
 import { routePieces } from "./route-window";
 import { DEFAULT_ADVICE_SETTINGS, type AdviceSettings } from "./settings";
+import { shortfallOf } from "./shortfall";
 import { nearestIndex } from "./stop-place";
-import type { DescentAdvice, RigAdvice, RunOutcome } from "./types";
+import type { DescentAdvice, PlanStatus, RigAdvice, RunOutcome } from "./types";
 import type { Region } from "@/lib/compliance";
 import { legalReasons } from "./legal";
 import { rigVerdict, traceVerdict } from "./verdict";
@@ -107,7 +108,7 @@ export function adviseRig(input: AdviseRigInput): RigAdvice {
     descents: advice,
     proof,
     worstClass,
-    verdict: legal.length > 0 ? "not advised" : traceVerdict(rigVerdict(advice, flagged.length > 0), worstClass),
+    verdict: legal.length > 0 ? "not advised" : traceVerdict(rigVerdict(advice, flagged.length > 0, worstClass.withAdvice), worstClass),
     legalReasons: legal,
     uncertainty: [],
     waypoints,
@@ -162,11 +163,12 @@ function finishAdvice(
     stop: draft.stop,
     trailer: draft.trailer,
     nothingIsEnough: draft.nothingIsEnough,
+    shortfall: isBelow(outcome, "hot") ? null : shortfallOf(outcome, model, draft.trailer),
     walkingPace: draft.walkingPace,
     plan: {
       plan: draft.plan,
       stops: draft.planStops,
-      status: isBelow(outcome, "warm") ? "below-warm" : isBelow(outcome, "hot") ? "below-hot" : "above-hot",
+      status: planStatus(outcome),
       outcome,
     },
     stopping: {
@@ -174,6 +176,17 @@ function finishAdvice(
       withPlan: hotColdStops(model, ends(outcome)),
     },
   };
+}
+
+/**
+ * Where a plan's outcome keeps the brakes: below warm, below hot, or not below hot (fluid boil risk and runaway
+ * count as not below hot, whatever the temperatures).
+ * @param outcome the plan's re-run on the descent
+ * @returns the status
+ * @example planStatus(outcome) // "below-hot"
+ */
+export function planStatus(outcome: RunOutcome): PlanStatus {
+  return isBelow(outcome, "warm") ? "below-warm" : isBelow(outcome, "hot") ? "below-hot" : "above-hot";
 }
 
 /** @private Brake state at a trace sample. */

@@ -1,5 +1,5 @@
 /**
- * Cautions in our own words (after trade-facts.md §6). They go with every printed or shown piece of advice (issue 5 §9), and the
+ * Cautions in our own words (after trade-facts.md §6). They go with every printed or shown piece of advice, and the
  * standstill cautions with every cool-down stop (trade-facts.md §3.2). The infrared-thermometer check is
  * common practice (trade-facts.md §5, item 5: forum answers), not a published rule.
  */
@@ -21,11 +21,4 @@ export const STANDSTILL_CAUTIONS: readonly string[] = [
   "Don't sit with your foot on the brake pedal: pads held against hot discs keep them hot. Hold the rig in Park or in gear.",
   "Don't set the park brake on very hot drums, as they can bind: chock the wheels and leave it in gear or Park.",
   "Don't pour water on hot brakes.",
-];
-
-/** What to consider when nothing is enough. */
-export const NOTHING_IS_ENOUGH_OPTIONS: readonly string[] = [
-  "choose a different route",
-  "carry less load",
-  "have a brake upgrade assessed by a licensed mechanic",
 ];

@@ -1,5 +1,5 @@
 /**
- * Brake-setup comparison (issue 5 §8): the same rig with other brakes (rotor or drum mass, vented or solid,
+ * Brake-setup comparison: the same rig with other brakes (rotor or drum mass, vented or solid,
  * pad family, fluid class and age) on the same route and conditions, side by side per descent: peak
  * temperature per position, driving time at or above the warm (caution) line, and the hot stopping distance at
  * the bottom beside the cold one. Estimates, like everything the model gives.

@@ -1,8 +1,9 @@
 /**
- * lib/advice: the pure advice engine of Fadeline (issue 5 §4, §5, §8). For every descent where a rig reaches
- * the warm (caution) line or worse: gear, speed, cool-down stops, trailer brakes, "nothing is enough", and a
- * combined plan, each re-run through lib/thermal and carrying its result; the whole route re-run with all
- * advice applied (the proof); convoy verdicts; brake-setup comparison; text for drivers in metric or imperial.
+ * lib/advice: the pure advice engine of Fadeline. For every descent where a rig reaches the warm (caution)
+ * line or worse: gear, speed, cool-down stops where a rig can stand, trailer brakes, and a combined plan, or
+ * when nothing is enough, which brake falls short, by how much, and what would change it; each re-run
+ * through lib/thermal and carrying its result; the whole route re-run with all advice applied (the proof);
+ * convoy verdicts; brake-setup comparison; text for drivers in metric or imperial.
  * Pure and isomorphic (no I/O, no Node-only imports); SI inside, temperatures in °C.
  */
 
@@ -15,8 +16,9 @@ export { adviceOptions, proveAdvice } from "./prove";
 export { withBands, judgeOnBand, type BandedAdvice } from "./band";
 export { compareBrakeSetups, withBrakeSetup, type BrakeComparisonRow, type BrakeSetup, type SetupFigures } from "./compare-brakes";
 export { stopDuration, stopTargets } from "./stop-plan";
+export { shortfallOf } from "./shortfall";
 export { outcomeOf, marginTo, isBelow } from "./outcome";
 export { renderDescentAdvice, renderRigAdvice, distanceText, type DescentText, type RenderOptions } from "./render";
 export { renderConvoy } from "./render-convoy";
-export { CLASS_WORDS, ordinal, speedLimitText } from "./render-parts";
-export { GENERAL_CAUTIONS, STANDSTILL_CAUTIONS, NOTHING_IS_ENOUGH_OPTIONS } from "./cautions";
+export { CLASS_WORDS, ordinal, speedLimitText, shortfallText, stopText, stopsAddText } from "./render-parts";
+export { GENERAL_CAUTIONS, STANDSTILL_CAUTIONS } from "./cautions";

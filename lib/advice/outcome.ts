@@ -1,10 +1,11 @@
 /**
  * The result of one run over a descent, and whether it stays below a line. Fluid boil risk counts against both
- * lines: a plan that boils the fluid is never "below" anything. One pass over the descent's samples (this runs
+ * lines, and so does runaway (past the model's valid range, or the brakes no longer holding the speed): a plan
+ * that boils the fluid or runs away is never "below" anything, whatever its temperatures. One pass over the descent's samples (this runs
  * for every search step, so it skips the energy account that summarizeDescents keeps).
  */
 
-import { STEP_CLASSES, type HeatRunResult } from "@/lib/thermal";
+import { STEP_CLASSES, type HeatRunResult, type StepClass } from "@/lib/thermal";
 import type { AdviceLine, PositionOutcome, RunOutcome } from "./types";
 
 /**
@@ -68,7 +69,18 @@ export function marginTo(outcome: RunOutcome, line: AdviceLine): number {
  * @example isBelow(outcome, "hot")
  */
 export function isBelow(outcome: RunOutcome, line: AdviceLine): boolean {
+  if (classRank(outcome.worstClass) >= classRank(line)) return false;
   return marginTo(outcome, line) > 0;
+}
+
+/**
+ * Rank of a step class, worst last: cool < warm < hot < boil-risk < runaway (lib/thermal STEP_CLASSES).
+ * @param c a step class
+ * @returns its rank, 0 for cool
+ * @example classRank("runaway") > classRank("boil-risk") // true
+ */
+export function classRank(c: StepClass): number {
+  return STEP_CLASSES.indexOf(c);
 }
 
 /** @private First index in [0, n) whose distance is ≥ atM (n if none), by bisection (distances non-decreasing). */

@@ -14,9 +14,9 @@ import {
   M_PER_MI,
   type UnitSystem,
 } from "@/lib/units";
-import type { BandEdges, PlannedStop, RunOutcome, StopPlace } from "./types";
+import type { BandEdges, PlannedStop, RunOutcome, Shortfall, ShortfallRemedy, StopPlace } from "./types";
 
-/** The step classes in the words of the plan page (issue 5 §3). */
+/** The step classes in the words of the plan page, worst last (runaway is worse than fluid boil risk). */
 export const CLASS_WORDS: Readonly<Record<StepClass, string>> = {
   cool: "below caution",
   warm: "caution",
@@ -116,22 +116,99 @@ export function gearText(gear: number, highRangeGears: number): string {
 }
 
 /**
- * Where a stop is, in words.
+ * Where a stop is, in words. A flat place is never steeper than the advice's stop grade (4 %).
  * @param stop the stop
  * @param system unit system
- * @returns e.g. "at Fernhollow Camp (35.6 km)", "at the crest (31.6 km)", "at 32.7 km, where the road levels out (2 % down)"
+ * @returns e.g. "at Fernhollow Camp (35.6 km)", "at the crest (31.6 km)", "at 32.7 km, where the road eases to 2 % down"
  * @example stopPlaceText(stop, "metric")
  */
-export function stopPlaceText(stop: PlannedStop, system: UnitSystem): string {
+export function stopPlaceText(stop: Pick<PlannedStop, "atM" | "place">, system: UnitSystem): string {
   const where = at(stop.atM, system);
   const place: StopPlace = stop.place;
   if (place.kind === "waypoint") return `at ${place.name} (${where})`;
   if (place.kind === "crest") return `at the crest (${where})`;
   const pct = Math.abs(place.grade * 100);
   if (pct < 1) return `at ${where}, where the road is nearly level`;
-  const slope = `${pct.toFixed(0)} % ${place.grade < 0 ? "down" : "up"}`;
-  if (pct < 3) return `at ${where}, where the road levels out (${slope})`;
-  return `at ${where} (${slope}, the flattest there: choose a safe place to pull off nearby)`;
+  return `at ${where}, where the road eases to ${pct.toFixed(0)} % ${place.grade < 0 ? "down" : "up"}`;
+}
+
+/**
+ * Each stop as an instruction, the same words wherever the stop is quoted.
+ * @param stop the stop
+ * @param system unit system
+ * @returns e.g. "stop for 20 minutes at the crest (3.0 km)"
+ * @example stopText(stop, "metric")
+ */
+export function stopText(stop: PlannedStop, system: UnitSystem): string {
+  return `stop for ${minutesText(stop.durationS)} ${stopPlaceText(stop, system)}`;
+}
+
+/**
+ * The time a descent's stops add to the day.
+ * @param stops the stops
+ * @returns e.g. "the stop adds 20 min to the day", "the two stops add 35 min to the day"; "" without stops
+ * @example stopsAddText(stops) // "the two stops add 35 min to the day"
+ */
+export function stopsAddText(stops: readonly PlannedStop[]): string {
+  if (stops.length === 0) return "";
+  const minutes = Math.round(stops.reduce((sum, s) => sum + s.durationS, 0) / 60);
+  const count = ["", "the stop adds", "the two stops add", "the three stops add"][stops.length] ?? `the ${stops.length} stops add`;
+  return `${count} ${minutes} min to the day`;
+}
+
+/**
+ * A temperature difference in the user's unit (K shown as °C, or as °F at 9/5 per K).
+ * @param k difference, K
+ * @param system unit system
+ * @returns e.g. "58 °C", "104 °F"
+ * @example temperatureDifferenceText(58, "imperial") // "104 °F"
+ */
+export function temperatureDifferenceText(k: number, system: UnitSystem): string {
+  return system === "metric" ? `${Math.round(k).toLocaleString("en")} °C` : `${Math.round((k * 9) / 5).toLocaleString("en")} °F`;
+}
+
+/**
+ * Why a plan is not enough, in words: which brake, how hot, how far past which line, and where.
+ * @param s the shortfall
+ * @param system unit system
+ * @param trailerNoun word for the trailer ("caravan")
+ * @returns e.g. "the caravan drums would still reach about 318 °C, 58 °C past their fade-likely line (near 8.1 km)"
+ * @example shortfallText(advice.shortfall, "metric", "caravan")
+ */
+export function shortfallText(s: Shortfall, system: UnitSystem, trailerNoun: string): string {
+  const owner = s.position === "trailer" ? trailerNoun : s.position;
+  const brakes = `the ${owner} ${s.brake}s`;
+  const near = `near ${at(s.atM, system)}`;
+  const over = temperatureDifferenceText(s.peakC - s.lineC, system);
+  const peak = formatTemperature(s.peakC, system);
+  if (s.line === "hot") return `${brakes} would still reach about ${peak}, ${over} past their fade-likely line (${near})`;
+  if (s.line === "boil") return `the ${owner} brake fluid would still reach about ${peak}, ${over} past its estimated boiling point (${near})`;
+  if (Number.isNaN(s.lineC)) return `${brakes} could no longer hold the speed, so the brakes may fail there (${near})`;
+  return `${brakes} would reach about ${peak}, past the ${formatTemperature(s.lineC, system)} the model can describe, so the brakes may fail there (${near})`;
+}
+
+/**
+ * What would change a plan that is not enough, in words.
+ * @param remedy the remedy
+ * @param context the trailer noun and the controller gain in use (for the gain remedy)
+ * @returns e.g. "carry less load"
+ * @example remedyText("brake-upgrade", { trailerNoun: "caravan", gain: 1 }) // "have a brake upgrade assessed by a licensed mechanic"
+ */
+export function remedyText(remedy: ShortfallRemedy, context: { trailerNoun: string; gain: number | null }): string {
+  switch (remedy) {
+    case "less-load":
+      return "carry less load";
+    case "raise-trailer-gain": {
+      const now = context.gain === null ? "" : ` (now ${Math.round(context.gain * 100) / 100})`;
+      return `raise the brake controller's gain${now} so the ${context.trailerNoun}'s brakes do their share`;
+    }
+    case "fresh-fluid":
+      return "have the brake fluid changed (fresh fluid boils hotter)";
+    case "brake-upgrade":
+      return "have a brake upgrade assessed by a licensed mechanic";
+    case "another-route":
+      return "choose another route";
+  }
 }
 
 /**

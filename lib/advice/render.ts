@@ -1,12 +1,27 @@
 /**
  * Plain text of our own for a driver, from the structured advice, in metric or imperial units. Example:
  * "Before the crest at 31.6 km, select 2nd and hold it; keep to 45 km/h; stop for 10 minutes at Fernhollow
- * Camp (36.2 km)." Every piece of advice ends with its re-run result ("With this advice: front 240 °C, …").
+ * Camp (36.2 km); the stop adds 10 min to the day." Every piece of advice ends with its re-run result ("With
+ * this advice: front 240 °C, …"). A stop is quoted in the same words wherever it appears (stopText), and the
+ * plan's stops are the ones the stop line details. When the plan is not enough, the text says which brake,
+ * by how much past which line, and what would change it.
  */
 
 import { formatDistance, formatGrade, formatElevation, formatTemperature, formatTemperatureBand, type UnitSystem } from "@/lib/units";
-import { GENERAL_CAUTIONS, NOTHING_IS_ENOUGH_OPTIONS, STANDSTILL_CAUTIONS } from "./cautions";
-import { at, CLASS_WORDS, gearText, lengthText, minutesText, outcomeText, speedLimitText, stopPlaceText } from "./render-parts";
+import { GENERAL_CAUTIONS, STANDSTILL_CAUTIONS } from "./cautions";
+import { DEFAULT_ADVICE_SETTINGS } from "./settings";
+import {
+  at,
+  CLASS_WORDS,
+  gearText,
+  lengthText,
+  outcomeText,
+  remedyText,
+  shortfallText,
+  speedLimitText,
+  stopsAddText,
+  stopText,
+} from "./render-parts";
 import { trailerNoteText } from "./render-trailer";
 import type { BandNote, DescentAdvice, PlannedStop, RigAdvice } from "./types";
 
@@ -41,7 +56,8 @@ export function renderDescentAdvice(advice: DescentAdvice, system: UnitSystem, o
   const asPlanned = outcomeText(advice.baseline, system, noun, advice.bands?.asPlanned);
   const lines = [planLine(advice, system, noun), `As planned: ${asPlanned}.`];
   lines.push(gearLine(advice, system, result), speedLine(advice, system, result));
-  if (advice.stop) lines.push(stopLine(advice.stop.stops, advice.stop.enough, system, result(advice.stop.outcome)));
+  const stop = stopLine(advice, system, result);
+  if (stop !== null) lines.push(stop);
   for (const note of advice.trailer?.notes ?? []) lines.push(trailerNoteText(note, advice.trailer!, system, noun, result));
   lines.push(stoppingLine(advice, system));
   const stops = (advice.stop?.stops.length ?? 0) > 0 || advice.plan.stops.length > 0;
@@ -89,26 +105,39 @@ export function bandNoteText(note: BandNote, system: UnitSystem, noun: string): 
   return `Could reach ${what} on descent ${note.descentIndex + 1} within the model's uncertainty: ${hits}.`;
 }
 
-/** @private The combined plan as one sentence, with its result. */
+/** @private The combined plan as one sentence, with its result; when it is not enough, why and what would change it. */
 function planLine(a: DescentAdvice, system: UnitSystem, noun: string): string {
   const { plan } = a.plan;
   const result = outcomeText(a.plan.outcome, system, noun, a.bands?.withAdvice);
-  if (a.nothingIsEnough) {
-    const pace = plan.speedMs === undefined ? "walking pace" : speedLimitText(plan.speedMs, system);
-    return `Nothing we can suggest keeps these brakes out of the fade range on this descent: even the gentlest plan ` +
-      `(${gearText(plan.gear ?? 1, a.highRangeGears)} held, at ${pace}) gives ${result}. ` +
-      `Please ${NOTHING_IS_ENOUGH_OPTIONS.slice(0, -1).join(", ")}, or ${NOTHING_IS_ENOUGH_OPTIONS.at(-1)}.`;
-  }
   const parts: string[] = [];
   if (plan.gear !== undefined) {
     const top = plan.speedMs === undefined && a.gear.heldTopMs !== null ? ` (up to ${speedLimitText(a.gear.heldTopMs, system)})` : "";
     parts.push(`select ${gearText(plan.gear, a.highRangeGears)}${a.gear.manualMode ? " in manual mode" : ""} and hold it${top}`);
   }
   if (plan.speedMs !== undefined) parts.push(`keep to ${speedLimitText(plan.speedMs, system)}`);
-  for (const s of a.plan.stops) parts.push(`stop for ${minutesText(s.durationS)} ${stopPlaceText(s, system)}`);
+  for (const s of a.plan.stops) parts.push(stopText(s, system));
+  if (a.plan.stops.length > 0) parts.push(stopsAddText(a.plan.stops));
   if (parts.length === 0) parts.push("drive as planned");
+  const crest = `before the crest at ${at(a.descent.startDistanceM, system)}`;
+  const runaway = a.baseline.worstClass === "runaway" ? " As planned, the brakes may fail on this descent." : "";
+  if (a.nothingIsEnough || a.shortfall !== null) {
+    const lead = a.nothingIsEnough
+      ? `Plan: not enough. No gear, held speed or cool-down stop we can suggest keeps these brakes out of the fade range on this descent. The gentlest plan, ${crest}, is to ${parts.join("; ")}.`
+      : `Plan: ${crest}, ${parts.join("; ")}. This is not enough.`;
+    return `${lead} With this plan: ${result}.${runaway}${shortfallSentence(a, system, noun)}`;
+  }
   const caution = a.plan.status === "below-warm" ? "" : " The brakes still reach the caution range: go gently and check them at the bottom.";
-  return `Plan: before the crest at ${at(a.descent.startDistanceM, system)}, ${parts.join("; ")}. With this plan: ${result}.${caution}`;
+  const saved = runaway === "" ? "" : " As planned, the brakes may fail on this descent: follow this plan.";
+  return `Plan: ${crest}, ${parts.join("; ")}. With this plan: ${result}.${caution}${saved}`;
+}
+
+/** @private Why the plan is not enough and what would change it (empty without a shortfall). */
+function shortfallSentence(a: DescentAdvice, system: UnitSystem, noun: string): string {
+  if (a.shortfall === null) return " What would change it: carry less load, have a brake upgrade assessed by a licensed mechanic, or choose another route.";
+  const why = shortfallText(a.shortfall, system, noun);
+  const remedies = a.shortfall.remedies.map((r) => remedyText(r, { trailerNoun: noun, gain: a.trailer?.gain ?? null }));
+  const list = remedies.length > 1 ? `${remedies.slice(0, -1).join(", ")}, or ${remedies.at(-1)}` : (remedies[0] ?? "");
+  return ` ${why.charAt(0).toUpperCase()}${why.slice(1)}. What would change it: ${list}.`;
 }
 
 /** @private */
@@ -129,12 +158,32 @@ function speedLine(a: DescentAdvice, system: UnitSystem, result: (o: DescentAdvi
     `${faster} faster is not enough. With this advice: ${result(s.outcome)}.`;
 }
 
-/** @private */
-function stopLine(stops: readonly PlannedStop[], enough: boolean, system: UnitSystem, result: string): string {
-  if (stops.length === 0) return "Cool-down stop: no place before the brakes get too hot would let them cool; slow down before the crest instead.";
-  const each = stops.map((s) => `stop for ${minutesText(s.durationS)} ${stopPlaceText(s, system)}${s.capped ? " (longer if you can: the brakes need more)" : ""}`);
-  const tail = enough ? "" : " Even with these stops the brakes get too hot; use the plan above.";
-  return `Cool-down stop, driving as planned: ${each.join("; then ")}. With these stops: ${result}.${tail}`;
+/** The places a rig can stand for a cool-down stop, in words (stop-place.ts, with the default stop grade). */
+const STAND_PLACES = `the crest, a named waypoint, or road no steeper than ${Math.round(DEFAULT_ADVICE_SETTINGS.maxStopGrade * 100)} %`;
+
+/** Where a cool-down stop is made, in words. */
+const STOP_RULE = `A stop is made where a rig can stand (${STAND_PLACES}), as late as it can be before the brakes would pass the line.`;
+
+/**
+ * @private The cool-down stop line: the plan's own stops when it has any (the same words as the plan line),
+ * else the stops driving as planned, offered instead of the plan; when the plan is not enough and no stop would
+ * help, that is said; otherwise null.
+ */
+function stopLine(a: DescentAdvice, system: UnitSystem, result: (o: DescentAdvice["baseline"]) => string): string | null {
+  const each = (stops: readonly PlannedStop[]) =>
+    stops.map((s) => `${stopText(s, system)}${s.capped ? " (the longest stop we suggest: the brakes are still warm when you move off)" : ""}`).join("; then ");
+  if (a.plan.stops.length > 0) {
+    const base = a.plan.plan.gear !== undefined || a.plan.plan.speedMs !== undefined ? ", with the gear and speed above" : "";
+    const title = `Cool-down stop${a.plan.stops.length > 1 ? "s" : ""}${base}`;
+    return `${title}: ${each(a.plan.stops)}; ${stopsAddText(a.plan.stops)}. ${STOP_RULE} With these stops: ${result(a.plan.outcome)}.`;
+  }
+  if (a.stop === null) return null;
+  if (a.stop.stops.length === 0) {
+    if (a.plan.status !== "above-hot") return null;
+    return `Cool-down stop: none would help. There is no place a rig can stand (${STAND_PLACES}) before the brakes would pass the fade-likely line where a stop would cool them.`;
+  }
+  const tail = a.stop.enough ? "" : " Even with these stops the brakes get too hot; use the plan above.";
+  return `Cool-down stop, instead of the plan above (driving as planned): ${each(a.stop.stops)}; ${stopsAddText(a.stop.stops)}. ${STOP_RULE} With these stops: ${result(a.stop.outcome)}.${tail}`;
 }
 
 /** @private Hot versus cold stopping distance at the bottom. */

@@ -19,19 +19,26 @@ export interface AdviceSettings {
   walkingPaceMs: number;
   /** Target of a cool-down stop: this far below each brake's warm line, K. */
   stopMarginK: number;
-  /** Shortest and longest cool-down stop we suggest, s. */
+  /**
+   * Shortest and longest cool-down stop we suggest, s (whole minutes). 10–20 minutes is the usual stop; half an
+   * hour is as long as a convoy will stand (common practice, no published source).
+   */
   minStopS: number;
   maxStopS: number;
-  /** Most cool-down stops on one descent. */
+  /** Most cool-down stops on one descent: a driver makes one, two at most (common practice, no published source). */
   maxStops: number;
+  /**
+   * Steepest grade a rig may be parked on for a cool-down stop (either way, rise over run): a stop is made at
+   * the crest, a lookout, a rest area or a flat pull-off, never on the downgrade (common practice, no published
+   * source). Named waypoints are taken as such places whatever the road's grade beside them.
+   */
+  maxStopGrade: number;
+  /** Length of road over which a stop place's grade is measured, centred on it: room to park a rig, m. */
+  parkingStretchM: number;
   /** A stop is placed at least this far before the point where the line would be crossed, m. */
   stopBackoffM: number;
   /** The rig must arrive at a stop at least this far below the line (slowing heats the brakes), K. */
   stopArrivalMarginK: number;
-  /** Search a stop place at most this far before that point, m. */
-  stopSearchM: number;
-  /** Flatness slack: places within this grade of the flattest are as good, and the latest of them is chosen. */
-  flatSlackGrade: number;
   /** A named waypoint this close to the chosen place is used instead, m ("a few hundred metres"). */
   waypointSnapM: number;
   /** Least distance between two stops on one descent, m. */
@@ -48,12 +55,12 @@ export const DEFAULT_ADVICE_SETTINGS: Readonly<AdviceSettings> = {
   walkingPaceMs: 10 / 3.6,
   stopMarginK: 50,
   minStopS: 300,
-  maxStopS: 3600,
-  maxStops: 3,
+  maxStopS: 1800,
+  maxStops: 2,
+  maxStopGrade: 0.04,
+  parkingStretchM: 100,
   stopBackoffM: 150,
   stopArrivalMarginK: 10,
-  stopSearchM: 3000,
-  flatSlackGrade: 0.01,
   waypointSnapM: 400,
   minStopSpacingM: 500,
 };

@@ -1,8 +1,13 @@
 /**
- * Where to make a cool-down stop: before the point where the brakes would cross the line, on the flattest
- * stretch there (the latest of the nearly flattest places, where the brakes are hottest and cool fastest),
- * at a named waypoint when one lies within a few hundred metres, or at the crest. Only places where some brake
- * is clearly above its stop target qualify: a stop there cools something.
+ * Where to make a cool-down stop: somewhere a rig can stand, before the point where the brakes would cross the
+ * line. A rig is stopped at the crest, a lookout, a rest area or a flat pull-off, never on the downgrade
+ * (common practice, no published source). So the places are: a named waypoint (the GPX file's own lookouts and
+ * rest areas), or road no steeper than `maxStopGrade` either way over a stretch long enough to park a rig
+ * (`parkingStretchM`, centred on the place); the crest is such a place when the road there is that flat. Of
+ * these, the latest before the crossing is chosen (the brakes are hottest there, so the stop cools the most),
+ * and a named waypoint within a few hundred metres of it is used instead. When the only such places are far
+ * back (the crest, say), the stop goes there; when no such place would cool anything, there is no stop. Only
+ * places where some brake is clearly above its stop target qualify: a stop there cools something.
  */
 
 import type { PlacedWaypoint } from "@/lib/route";
@@ -12,7 +17,7 @@ import type { AdviceLine, StopPlace } from "./types";
 
 /** A chosen stop place. */
 export interface StopSpot {
-  /** Where, m along the route (exactly a sample of the route). */
+  /** Where, m along the route (exactly a sample of the route, or a waypoint's distance). */
   atM: number;
   /** How it was chosen. */
   place: StopPlace;
@@ -20,8 +25,6 @@ export interface StopSpot {
 
 /** A brake must be at least this far above its stop target for a place to qualify, K. */
 const USEFUL_EXCESS_K = 5;
-/** Half-width of the stretch over which flatness is measured, m. */
-const FLAT_HALF_WIDTH_M = 50;
 /** A place this close to the crest is "at the crest", m. */
 const CREST_M = 100;
 
@@ -52,16 +55,16 @@ export function firstCrossing(result: HeatRunResult, startM: number, endM: numbe
 }
 
 /**
- * Choose a stop place before a crossing.
- * @param route the whole prepared route (for flatness)
- * @param result the run in which the crossing happens (at the route's step)
+ * Choose a stop place before a crossing (rule in the module comment).
+ * @param route the whole prepared route (for the grade of a place)
+ * @param result the run in which the crossing happens
  * @param crossing trace index of the crossing
  * @param window earliest distance allowed, m (after the lead-in start or the previous stop), the crest, m, and
  *   optionally a latest distance, m (to move a stop earlier when its arrival is too close to the line)
  * @param targetC stop target per position, °C
  * @param waypoints placed waypoints
  * @param settings settings
- * @returns the place, or null when no place before the crossing would cool anything
+ * @returns the place, or null when no place a rig can stand on before the crossing would cool anything
  * @example chooseStopSpot(route, run.result, k, { fromM: 30_800, crestM: 31_640 }, [200, 200, 150], wps, settings)
  */
 export function chooseStopSpot(
@@ -75,55 +78,64 @@ export function chooseStopSpot(
 ): StopSpot | null {
   const t = result.trace;
   const toM = Math.min((t.distanceM[crossing] as number) - settings.stopBackoffM, window.latestM ?? Infinity);
-  const fromM = Math.max(window.fromM, toM - settings.stopSearchM);
+  const fromM = window.fromM;
   const useful = (k: number) =>
     result.positions.some((_, j) => (t.rotorC[j]![k] as number) > (targetC[j] as number) + USEFUL_EXCESS_K);
-  const candidates: { k: number; grade: number }[] = [];
-  for (let k = 0; k < crossing; k++) {
+  const usefulAt = (m: number) => useful(nearestIndex(t.distanceM, m));
+  let flat: { atM: number; grade: number } | null = null;
+  for (let k = crossing - 1; k >= 0 && flat === null; k--) {
     const d = t.distanceM[k] as number;
-    if (d >= fromM && d <= toM && useful(k)) candidates.push({ k, grade: localGrade(route, d) });
+    if (d > toM) continue;
+    if (d < fromM) break;
+    if (!useful(k)) continue;
+    const grade = localGrade(route, d, settings.parkingStretchM / 2);
+    if (Math.abs(grade) <= settings.maxStopGrade) flat = { atM: d, grade };
   }
-  if (candidates.length === 0) return null;
-  const flattest = Math.min(...candidates.map((c) => Math.abs(c.grade)));
-  const chosen = candidates.filter((c) => Math.abs(c.grade) <= flattest + settings.flatSlackGrade).at(-1)!;
-  const chosenM = t.distanceM[chosen.k] as number;
-  const named = nearestWaypoint(waypoints, chosenM, fromM, toM, settings.waypointSnapM);
-  if (named !== null && useful(nearestIndex(t.distanceM, named.distanceM as number))) {
-    return { atM: named.distanceM as number, place: { kind: "waypoint", name: named.name as string } };
-  }
-  if (Math.abs(chosenM - window.crestM) <= CREST_M) return { atM: chosenM, place: { kind: "crest" } };
-  return { atM: chosenM, place: { kind: "flat", grade: chosen.grade } };
+  const named = namedBetween(waypoints, fromM, toM).filter((w) => usefulAt(w.distanceM as number));
+  const lastNamed = named.at(-1) ?? null;
+  if (flat === null) return lastNamed === null ? null : waypointSpot(lastNamed);
+  if (lastNamed !== null && (lastNamed.distanceM as number) > flat.atM) return waypointSpot(lastNamed);
+  const snapped = nearestWaypoint(named, flat.atM, settings.waypointSnapM);
+  if (snapped !== null) return waypointSpot(snapped);
+  if (Math.abs(flat.atM - window.crestM) <= CREST_M) return { atM: flat.atM, place: { kind: "crest" } };
+  return { atM: flat.atM, place: { kind: "flat", grade: flat.grade } };
 }
 
 /**
- * Mean grade over ±50 m around a distance (rise over run, negative downhill).
+ * Mean grade over ±halfWidthM around a distance (rise over run, negative downhill).
  * @param route prepared route
  * @param atM distance, m
+ * @param halfWidthM half the stretch, m (default 50: a 100 m stretch)
  * @returns grade (dimensionless)
  * @example localGrade(route, 35_000) // −0.02
  */
-export function localGrade(route: PreparedRoute, atM: number): number {
+export function localGrade(route: PreparedRoute, atM: number, halfWidthM = 50): number {
   const d = route.profile.distanceM;
   const e = route.profile.elevationM;
-  const a = nearestIndex(d, atM - FLAT_HALF_WIDTH_M);
-  const b = nearestIndex(d, atM + FLAT_HALF_WIDTH_M);
+  const a = nearestIndex(d, atM - halfWidthM);
+  const b = nearestIndex(d, atM + halfWidthM);
   const run = (d[b] as number) - (d[a] as number);
   return run > 0 ? ((e[b] as number) - (e[a] as number)) / run : 0;
 }
 
-/** @private Nearest named, placed waypoint to a distance within [fromM, toM] and `snapM`. */
-function nearestWaypoint(
-  waypoints: readonly PlacedWaypoint[],
-  atM: number,
-  fromM: number,
-  toM: number,
-  snapM: number,
-): PlacedWaypoint | null {
+/** @private A waypoint as a stop place. */
+function waypointSpot(w: PlacedWaypoint): StopSpot {
+  return { atM: w.distanceM as number, place: { kind: "waypoint", name: w.name as string } };
+}
+
+/** @private Named, placed waypoints within [fromM, toM], in route order. */
+function namedBetween(waypoints: readonly PlacedWaypoint[], fromM: number, toM: number): PlacedWaypoint[] {
+  return waypoints
+    .filter((w) => w.name !== null && w.name.trim() !== "" && w.distanceM !== null && w.distanceM >= fromM && w.distanceM <= toM)
+    .sort((a, b) => (a.distanceM as number) - (b.distanceM as number));
+}
+
+/** @private Nearest of some waypoints to a distance, within `snapM`. */
+function nearestWaypoint(waypoints: readonly PlacedWaypoint[], atM: number, snapM: number): PlacedWaypoint | null {
   let best: PlacedWaypoint | null = null;
   for (const w of waypoints) {
-    if (w.name === null || w.name.trim() === "" || w.distanceM === null) continue;
-    if (w.distanceM < fromM || w.distanceM > toM || Math.abs(w.distanceM - atM) > snapM) continue;
-    if (best === null || Math.abs(w.distanceM - atM) < Math.abs((best.distanceM as number) - atM)) best = w;
+    if (Math.abs((w.distanceM as number) - atM) > snapM) continue;
+    if (best === null || Math.abs((w.distanceM as number) - atM) < Math.abs((best.distanceM as number) - atM)) best = w;
   }
   return best;
 }

@@ -1,8 +1,10 @@
 /**
- * Cool-down stops on one descent: before the brakes would cross the line, stop (stop-place.ts) for as long as
- * the standstill cooling model (lib/thermal standstillTimeToReach) needs to bring every brake to its target,
- * each brake's warm line minus a margin, rounded up to whole minutes (at least 5). Each stop is proven by
- * re-running the descent with it; the next stop, if one is needed, is placed on that re-run.
+ * Cool-down stops on one descent: before the brakes would cross the line, stop where a rig can stand
+ * (stop-place.ts) for as long as the standstill cooling model (lib/thermal standstillTimeToReach) needs to bring
+ * every brake to its target, each brake's warm line minus a margin, rounded up to whole minutes, at least
+ * `minStopS` (5 min) and at most `maxStopS` (30 min). One stop is planned first; a second (at most `maxStops`)
+ * only when the re-run with the first still crosses the line. Each stop is proven by re-running the descent
+ * with it; the next stop, if one is needed, is placed on that re-run.
  *
  * The first stop is placed on the search-step run; every stop is proven at the route's step. The arrival state
  * includes the heat of slowing down for the stop; it comes from a run up to the stop (arrivalAt), which gives
@@ -132,7 +134,7 @@ export function stopTargets(model: ResolvedModel, marginK: number): number[] {
  * @param targetC target per position, °C
  * @param limits shortest and longest stop, s
  * @returns duration, s; the cooling model's time, s; whether it was capped
- * @example stopDuration(model, [290, 250, 260], [200, 200, 150], { minStopS: 300, maxStopS: 3600 }).durationS
+ * @example stopDuration(model, [290, 250, 260], [200, 200, 150], { minStopS: 300, maxStopS: 1800 }).durationS
  */
 export function stopDuration(
   model: ResolvedModel,
@@ -143,7 +145,8 @@ export function stopDuration(
   const state = { rotorC: [...arrivalC], fluidC: arrivalC.map(() => Number.NaN) };
   const modelTimeS = standstillTimeToReach(state, model.positions, targetC, model.params.ambientC).durationS;
   const minutes = Math.max(limits.minStopS, Math.ceil(modelTimeS / 60 - 1e-9) * 60);
-  return { durationS: Math.min(minutes, limits.maxStopS), modelTimeS, capped: minutes > limits.maxStopS };
+  const longest = Math.floor(limits.maxStopS / 60 + 1e-9) * 60;
+  return { durationS: Math.min(minutes, longest), modelTimeS, capped: minutes > longest };
 }
 
 /**

@@ -1,5 +1,5 @@
 /**
- * Structured advice for a rig on a route (issue 5 §4). Numbers in SI (m, s, m/s), temperatures in °C. Every
+ * Structured advice for a rig on a route. Numbers in SI (m, s, m/s), temperatures in °C. Every
  * piece of advice carries the result of re-running the model with it applied.
  */
 
@@ -160,6 +160,29 @@ export interface CombinedPlan {
   outcome: RunOutcome;
 }
 
+/** What would change a plan that is not enough (rendered in words by render.ts). */
+export type ShortfallRemedy = "less-load" | "raise-trailer-gain" | "fresh-fluid" | "brake-upgrade" | "another-route";
+
+/** Why a descent's plan is not enough: the brake furthest past its line, by how much, and what would change it. */
+export interface Shortfall {
+  /** The brake position, and whether it has discs or drums. */
+  position: BrakePosition;
+  brake: "disc" | "drum";
+  /**
+   * The line it passes: the fade-likely (hot) line, the fluid's estimated boiling point (boil), or the
+   * model's validity ceiling (runaway: the brakes may fail).
+   */
+  line: "hot" | "boil" | "runaway";
+  /** Its peak on the descent in the plan's proven re-run (the fluid proxy for boil), °C. */
+  peakC: number;
+  /** The line, °C (NaN for a runaway without a temperature past the ceiling: the brakes no longer hold the speed). */
+  lineC: number;
+  /** Where the peak is, m along the route. */
+  atM: number;
+  /** What would change it, in order. */
+  remedies: ShortfallRemedy[];
+}
+
 /** Advice for one descent where the rig reaches warm or worse. */
 export interface DescentAdvice {
   /** Index into the route's descents. */
@@ -178,8 +201,13 @@ export interface DescentAdvice {
   stop: StopAdvice | null;
   /** Trailer brakes, when towing. */
   trailer: TrailerAdvice | null;
-  /** Even 1st gear at walking pace (converter locked) leaves a brake at or above hot or the fluid at boil risk. */
+  /**
+   * No gear (held), speed step (in its gear, held) or cool-down stops keep every brake below hot and the fluid
+   * below boil risk (the internal flag; the words come from `shortfall`).
+   */
   nothingIsEnough: boolean;
+  /** Why the proven plan is not enough (it leaves a brake at or past hot, boil risk or runaway), else null. */
+  shortfall: Shortfall | null;
   /** The walking-pace re-run. */
   walkingPace: RunOutcome;
   /** Best combination, proven in the whole-route run. */

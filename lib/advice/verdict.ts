@@ -2,13 +2,16 @@
  * Verdicts in our words, for one rig and for a convoy (judged by its weakest rig). The rule:
  * - "clear": no descent takes any brake to the warm (caution) line or the fluid to boil risk, as planned;
  * - "not advised": on some descent nothing is enough (even 1st gear at walking pace with the converter locked
- *   leaves a brake at or above the hot line or the fluid at boil risk), or the proven combined plan still does;
+ *   leaves a brake at or above the hot line or the fluid at boil risk), or the proven combined plan still does,
+ *   or the whole route with all advice applied reaches the hot line, boil risk or runaway anywhere;
  * - "clear with advice": otherwise: every descent that needs advice has a combined plan whose whole-route
  *   re-run keeps every brake below the hot (fade-likely) line and the fluid below boil risk. A plan may leave
  *   a brake in the warm band; that is said plainly in the advice ("caution"), but it is not a reason to refuse.
+ * A descent that reaches runaway as planned is never "clear": it reaches warm or worse, so it has advice.
  */
 
 import type { StepClass } from "@/lib/thermal";
+import { classRank } from "./outcome";
 import type { DescentAdvice, Verdict } from "./types";
 
 /** Verdicts from best to worst. */
@@ -19,13 +22,21 @@ export const VERDICTS: readonly Verdict[] = ["clear", "clear with advice", "not 
  * @param advice advice for every descent that needs it
  * @param reachedWarm whether any descent reached warm or worse as planned (default: some advice exists); a
  *   descent can need no advice of its own once the plans before it have cooled the brakes
+ * @param worstWithAdvice worst class over the whole route with all advice applied (default: judged from the
+ *   descents alone)
  * @returns the verdict
  * @example rigVerdict([]) // "clear"
  */
-export function rigVerdict(advice: readonly DescentAdvice[], reachedWarm = advice.length > 0): Verdict {
-  if (!reachedWarm) return "clear";
+export function rigVerdict(
+  advice: readonly DescentAdvice[],
+  reachedWarm = advice.length > 0,
+  worstWithAdvice?: StepClass,
+): Verdict {
+  const routeRank = classRank(worstWithAdvice ?? "cool");
+  if (!reachedWarm && routeRank === classRank("cool")) return "clear";
   const fails = advice.some((a) => a.nothingIsEnough || a.plan.status === "above-hot");
-  return fails ? "not advised" : "clear with advice";
+  if (fails || routeRank >= classRank("hot")) return "not advised";
+  return "clear with advice";
 }
 
 /**

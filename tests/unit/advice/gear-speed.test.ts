@@ -1,7 +1,7 @@
 /**
  * Gear and speed advice, proven by independent re-runs of the whole route at its own step (runHeatRun with the
  * advice as a stretch control): the advised gear or speed keeps every brake below the warm line, and the next
- * higher gear or 5 km/h more does not (it is the highest). Source of the rules: issue 5 §4; the model:
+ * higher gear or 5 km/h more does not (it is the highest). The model:
  * lib/thermal (thermal-model.md §1–2). Rigs are the generic presets (estimates, not products).
  */
 

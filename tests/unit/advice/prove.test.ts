@@ -1,5 +1,5 @@
 /**
- * The proof (issue 5 §4): the whole route re-run in one piece at its own step with every descent's combined
+ * The proof: the whole route re-run in one piece at its own step with every descent's combined
  * plan applied (proveAdvice, adviceOptions). Advice exists to cool the brakes, so on every advised descent the
  * re-run's peaks are at or below the peaks as planned; and the engine's own proof, built from pieces, agrees
  * with the one-piece re-run within a few kelvin. Checked with an independent runHeatRun.

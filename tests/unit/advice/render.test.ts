@@ -1,5 +1,5 @@
 /**
- * Advice text (issue 5 §4): in metric or imperial, each piece of advice carrying its re-run result ("With this
+ * Advice text: in metric or imperial, each piece of advice carrying its re-run result ("With this
  * …"), the figures being the re-run's own, converted exactly (°F = °C × 9/5 + 32; 1 mi = 1609.344 m, NIST SP 811
  * App. B), and speeds rounded down (never faster than advised).
  */

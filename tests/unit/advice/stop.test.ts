@@ -1,20 +1,23 @@
 /**
- * Cool-down stops: placed before the brakes would cross the fade (hot) line, named after a waypoint within a
- * few hundred metres, lasting what the standstill cooling model needs (lib/thermal standstillTimeToReach),
- * rounded up to whole minutes (at least 5), and proven by a full re-run with HeatRunOptions.stops. Sources:
- * issue 5 §4; the cooling law is thermal-model.md §1.4–1.5 (exact exponential for convection only).
+ * Cool-down stops: placed before the brakes would cross the fade (hot) line, where a rig can stand (the crest,
+ * a named waypoint, or road no steeper than 4 % over a 100 m parking stretch, never on the downgrade), named
+ * after a waypoint within a few hundred metres, lasting what the standstill cooling model needs (lib/thermal
+ * standstillTimeToReach), rounded up to whole minutes (at least 5, at most 30), and proven by a full re-run
+ * with HeatRunOptions.stops. The cooling law is docs/model.md (exact exponential for convection only); where
+ * to stop is common practice, no published source.
  */
 
 import { describe, expect, it } from "vitest";
-import { adviseRig, isBelow, outcomeOf, stopDuration, stopTargets, type PlannedStop } from "@/lib/advice";
+import { adviseRig, DEFAULT_ADVICE_SETTINGS, isBelow, outcomeOf, stopDuration, stopTargets, type PlannedStop } from "@/lib/advice";
 import { firstCrossing, nearestIndex } from "@/lib/advice/stop-place";
 import { resolveModel, runHeatRun, standstillTimeToReach } from "@/lib/thermal";
-import { oneDescent, UTE_VAN, waypointAt } from "./scenarios";
+import { benchDescent, gradeAround, oneDescent, UTE_VAN, waypointAt } from "./scenarios";
 
-const route = oneDescent(-0.1, 2000); // crest at 3.0 km, bottom at 5.0 km
+const route = benchDescent(); // crest at 3.0 km, bench (2 % down) from 4.0 to 4.3 km, bottom at 5.1 km
 const { descent } = route;
+const { maxStopGrade, minStopS, maxStopS } = DEFAULT_ADVICE_SETTINGS;
 
-function stopAdvice(waypoints = [waypointAt("Saddle Bay", 4200)]) {
+function stopAdvice(waypoints = [waypointAt("Saddle Bay", 3900)]) {
   const a = adviseRig({ route: route.profile, descents: route.descents, rig: UTE_VAN, waypoints }).descents[0]!;
   expect(a.stop).not.toBeNull();
   return a.stop!;
@@ -38,14 +41,31 @@ describe("cool-down stop", () => {
     expect(stop.atM).toBeGreaterThanOrEqual(descent.startDistanceM - 500);
   });
 
-  it("uses a named waypoint within a few hundred metres of the chosen place", () => {
-    expect(stop.place).toEqual({ kind: "waypoint", name: "Saddle Bay" });
-    expect(stop.atM).toBe(4200);
+  it("without waypoints, is made on the bench, where the road is no steeper than 4 % over the parking stretch", () => {
     const unnamed = stopAdvice([]).stops[0]!;
     expect(unnamed.place.kind).toBe("flat");
-    expect(Math.abs(unnamed.atM - 4200)).toBeLessThanOrEqual(400); // the waypoint was within the snap distance
-    const far = stopAdvice([waypointAt("Far Gate", 3100)]).stops[0]!;
+    expect(unnamed.atM).toBeGreaterThanOrEqual(4000);
+    expect(unnamed.atM).toBeLessThanOrEqual(4300);
+    expect(Math.abs(gradeAround(route.profile, unnamed.atM))).toBeLessThanOrEqual(maxStopGrade + 1e-9);
+    if (unnamed.place.kind === "flat") expect(unnamed.place.grade).toBeCloseTo(gradeAround(route.profile, unnamed.atM), 9);
+  });
+
+  it("uses a named waypoint within a few hundred metres of the chosen place, and keeps its name", () => {
+    expect(stop.place).toEqual({ kind: "waypoint", name: "Saddle Bay" });
+    expect(stop.atM).toBe(3900);
+    const unnamed = stopAdvice([]).stops[0]!;
+    expect(Math.abs(unnamed.atM - 3900)).toBeLessThanOrEqual(400); // the waypoint was within the snap distance
+    const far = stopAdvice([waypointAt("Far Gate", 3700)]).stops[0]!;
     expect(far.place.kind).toBe("flat"); // more than 400 m from the chosen place: not used
+    expect(far.atM).toBe(unnamed.atM);
+  });
+
+  it("is not advised on a steady 10 % descent, where the only place to stand is the crest and the brakes are cold there", () => {
+    const steady = oneDescent(-0.1, 2100);
+    const a = adviseRig({ route: steady.profile, descents: steady.descents, rig: UTE_VAN }).descents[0]!;
+    expect(a.stop).not.toBeNull();
+    expect(a.stop!.stops).toEqual([]);
+    expect(a.plan.stops).toEqual([]);
   });
 
   it("lasts what the standstill cooling model needs from the arrival state, in whole minutes, at least 5", () => {
@@ -56,7 +76,9 @@ describe("cool-down stop", () => {
     expect(targets).toEqual([200, 150, 150]); // warm lines 250 / 200 / 200 °C minus 50 K
     const need = standstillTimeToReach({ rotorC: arrival, fluidC: arrival.map(() => NaN) }, proof.positions, targets, 25).durationS;
     expect(stop.modelTimeS).toBeCloseTo(need, 6);
-    expect(stop.durationS).toBe(Math.max(300, Math.ceil(need / 60) * 60));
+    expect(stop.capped).toBe(false);
+    expect(stop.durationS).toBe(Math.max(minStopS, Math.ceil(need / 60) * 60));
+    expect(stop.durationS).toBeLessThanOrEqual(maxStopS);
     expect(stop.durationS % 60).toBe(0);
   });
 
@@ -76,7 +98,7 @@ describe("cool-down stop", () => {
 
 describe("stop duration", () => {
   it("matches the analytic convection-only cooling law t = τ·ln((T0 − Ta)/(T1 − Ta)), τ = m·c/(f·hA_0)", () => {
-    // emissivity 0: no radiation, so the standstill conductance is f·hA_0, constant (thermal-model.md §1.5)
+    // emissivity 0: no radiation, so the standstill conductance is f·hA_0, constant (docs/model.md)
     const model = resolveModel(UTE_VAN, { emissivity: 0 });
     const front = model.positions[0]!;
     const tau = (front.massKg * front.specificHeat) / (front.standstillFactor * front.standstillConductanceWK);
@@ -88,11 +110,15 @@ describe("stop duration", () => {
     expect(analytic).toBeCloseTo(2083, -1);
   });
 
-  it("is at least 5 minutes and at most the longest stop, and says when it was capped", () => {
+  it("is at least 5 minutes and at most the longest stop (30 minutes), in whole minutes, and says when it was capped", () => {
     const model = resolveModel(UTE_VAN);
-    expect(stopDuration(model, [205, 25, 25], [200, 150, 150], { minStopS: 300, maxStopS: 3600 }).durationS).toBe(300);
-    const long = stopDuration(model, [600, 600, 600], [200, 150, 150], { minStopS: 300, maxStopS: 3600 });
-    expect(long.durationS).toBe(3600);
+    expect([minStopS, maxStopS]).toEqual([300, 1800]); // 5 and 30 minutes
+    expect(stopDuration(model, [205, 25, 25], [200, 150, 150], { minStopS, maxStopS }).durationS).toBe(300);
+    const long = stopDuration(model, [600, 600, 600], [200, 150, 150], { minStopS, maxStopS });
+    expect(long.modelTimeS).toBeGreaterThan(maxStopS);
+    expect(long.durationS).toBe(1800);
     expect(long.capped).toBe(true);
+    const odd = stopDuration(model, [600, 600, 600], [200, 150, 150], { minStopS, maxStopS: 1830 });
+    expect(odd.durationS).toBe(1800); // whole minutes even when the longest stop is not
   });
 });
