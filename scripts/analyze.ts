@@ -11,7 +11,7 @@
  */
 import { readFileSync } from "node:fs";
 import { parseArgs } from "node:util";
-import { withBands, adviseRig, renderRigAdvice } from "../lib/advice";
+import { adviseWithBands, renderRigAdvice } from "../lib/advice";
 import { adviceReport, summarizeAnalysis, type AnalysisResult, type PeakReport } from "../lib/analysis/analyze";
 import { RIG_PRESETS } from "../lib/analysis/presets";
 import { placeWaypoints, processGpx } from "../lib/route";
@@ -149,8 +149,7 @@ try {
   if (calibration) output.calibration = calibration;
   if (values.advice) {
     const waypoints = placeWaypoints(route.profile, route.gpx.waypoints);
-    const raw = adviseRig({ route: prepared, descents: route.descents, rig, options, waypoints, asPlanned: nominal, region: "AU" });
-    const { advice } = withBands(prepared, route.descents, rig, options, raw, nominal);
+    const { advice } = adviseWithBands({ route: prepared, descents: route.descents, rig, options, waypoints, asPlanned: nominal, region: "AU" });
     output.advice = adviceReport(advice);
     adviceText = renderRigAdvice(advice, "metric");
   }

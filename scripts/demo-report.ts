@@ -5,10 +5,10 @@
  */
 import { readFileSync } from "node:fs";
 import { join } from "node:path";
-import { adviseRig, renderRigAdvice, withBands } from "../lib/advice";
+import { adviseWithBands, renderRigAdvice } from "../lib/advice";
 import { conditionsToOptions, type PlanConditions } from "../lib/analysis/conditions";
 import { placeWaypoints, processGpx } from "../lib/route";
-import { prepareRoute, runPrepared } from "../lib/thermal";
+import { prepareRoute } from "../lib/thermal";
 import { formatTemperatureBand } from "../lib/units";
 import { DEMO_OWNER_RIGS, DEMO_TEAM_RIGS, type DemoRig } from "../db/demo/rigs";
 
@@ -32,8 +32,7 @@ for (const plan of PLANS) {
   console.log(`\n=== ${plan.name} (${plan.file}, ${descents.length} descents, ${plan.conditions.ambientC} °C)`);
   for (const member of plan.rigs) {
     const started = performance.now();
-    const raw = adviseRig({ route, descents, rig: member.rig, options, waypoints, region: "AU" });
-    const { advice } = withBands(route, descents, member.rig, options, raw, runPrepared(route, member.rig, options));
+    const { advice } = adviseWithBands({ route, descents, rig: member.rig, options, waypoints, region: "AU" });
     console.log(`\n--- ${member.name} (${(performance.now() - started).toFixed(0)} ms)`);
     for (const p of advice.proof) {
       const d = descents[p.descentIndex]!;

@@ -9,6 +9,10 @@
  * 3. else, when some gear (held) or speed step (in its gear, held) keeps them below the hot line, the one that
  *    keeps them furthest below it (the brakes will be in the caution range, so the most margin wins over
  *    speed), with cool-down stops added if they bring it below the warm line;
+ *    High range first: low range joins the candidates of steps 1–3 only on a steep descent (settings
+ *    lowRangeFromGrade, where 4x4 drivers reach for it), and otherwise only when no high-range gear or speed
+ *    keeps the brakes below the hot line. Stops are added in step 3 only when they are short (settings
+ *    cautionStopMaxS): a plan may leave the brakes in the caution band.
  * 4. else cool-down stops on top of the coolest gear and speed, else driving as planned with stops, if they
  *    keep every brake below the hot line; stops are only where a rig can stand, one first and two at most, each
  *    at most 30 minutes (stop-plan.ts, stop-place.ts);
@@ -67,7 +71,7 @@ export function adviseDescent(
   const stop = isBelow(asPlanned.outcome, "hot") ? null : planStops(route, runner, {}, "hot", waypoints);
   const trailer = trailerAdvice(runner, asPlanned);
   const combined = combinedPlan(route, runner, gear, speed, stop, speeds, waypoints);
-  const walkingPlan = gearForSpeed(runner, runner.settings.walkingPaceMs);
+  const walkingPlan = gearForSpeed(runner, runner.settings.walkingPaceMs, true);
   const walkingPace = runPlan(runner, walkingPlan, combined.nothingIsEnough || runner.coarse === runner.fine).outcome;
   const { nothingIsEnough } = combined;
   return { asPlanned, gear, speed, stop, trailer, nothingIsEnough, walkingPace, plan: combined.plan, planStops: combined.stops };
@@ -94,15 +98,21 @@ function combinedPlan(
   if (gear.gear !== null) return { ...none, plan: { gear: gear.gear } };
   const planOf = (i: number) => gearForSpeed(runner, speeds[i] as number);
   if (speed.speedMs !== null) return { ...none, plan: { gear: speed.gear, speedMs: speed.speedMs } };
-  const gearCount = runner.model.overallRatios.length;
+  // High range first (low range too on a steep descent: runner.lowRangeFirst); low range always in the last resort.
+  const highGears = runner.lowRangeFirst ? runner.model.overallRatios.length : runner.model.highRangeGears;
   const candidates = [
-    ...Array.from({ length: gearCount }, (_, i): DrivePlan => ({ gear: i + 1 })),
+    ...Array.from({ length: highGears }, (_, i): DrivePlan => ({ gear: i + 1 })),
     ...speeds.map((_, i) => planOf(i)),
   ];
-  const base = coolestBelowHot(runner, candidates);
-  if (base === null) return lastResort(route, runner, stop, candidates, waypoints);
+  let base = coolestBelowHot(runner, candidates);
+  const everyGear = Array.from({ length: runner.model.overallRatios.length }, (_, i): DrivePlan => ({ gear: i + 1 }));
+  const every = [...everyGear, ...speeds.map((v) => gearForSpeed(runner, v, true))];
+  // Low range when high range cannot keep the brakes below the fade-likely line.
+  if (base === null && every.length > candidates.length) base = coolestBelowHot(runner, every);
+  if (base === null) return lastResort(route, runner, stop, every, waypoints);
   const withStops = exploreStops(route, runner, base, "warm", waypoints);
-  if (withStops === null) return { ...none, plan: base };
+  const stopTimeS = withStops === null ? Infinity : withStops.stops.reduce((t, x) => t + x.durationS, 0);
+  if (withStops === null || stopTimeS > runner.settings.cautionStopMaxS) return { ...none, plan: base };
   return { plan: { ...base, stops: withStops.stops.map(stripStop) }, stops: withStops.stops, nothingIsEnough: false };
 }
 

@@ -84,7 +84,7 @@ export function adviseRig(input: AdviseRigInput): RigAdvice {
     const a = leadIns[i]!;
     const next = q + 1 < flagged.length ? leadIns[flagged[q + 1]!]! : route.n - 1;
     const context = { rig: input.rig, base, model: asPlanned.model, settings };
-    const runner = descentRunner(route, a, descents[i]!, state as ThermalState, context);
+    const runner = descentRunner(route, a, descents[i]!, state as ThermalState, context, settings.bandSpreads[i] ?? 0);
     const draft = adviseDescent(route, runner, waypoints);
     const planRun = runPlan(runner, draft?.plan ?? {}, draft !== null || runner.coarse === runner.fine);
     pieces.push({ startIndex: a, result: planRun.result });

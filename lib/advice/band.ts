@@ -7,7 +7,20 @@
  */
 
 import type { Descent } from "@/lib/route";
-import { peakBand, runBand, type BandSettings, type HeatBand, type HeatRunOptions, type HeatRunResult, type PreparedRoute, type Rig } from "@/lib/thermal";
+import {
+  peakBand,
+  prepareRoute,
+  runBand,
+  runPrepared,
+  validateRouteProfile,
+  type BandSettings,
+  type HeatBand,
+  type HeatRunOptions,
+  type HeatRunResult,
+  type PreparedRoute,
+  type Rig,
+} from "@/lib/thermal";
+import { adviseRig, type AdviseRigInput } from "./advise-rig";
 import { adviceOptions } from "./prove";
 import type { BandEdges, BandNote, RigAdvice, RunOutcome, Verdict } from "./types";
 
@@ -89,7 +102,7 @@ export function judgeOnBand(
       p.withAdvice.positions.flatMap((pos, j) => {
         const limit = line === "warm" ? pos.warmC : pos.hotC;
         const high = (p.band.withAdvice[j] as BandEdges).highC;
-        return pos.peakC < limit && high >= limit ? [{ position: pos.position, highC: high, limitC: limit }] : [];
+        return pos.peakC < limit && high >= limit ? [{ position: pos.position, peakC: pos.peakC, highC: high, limitC: limit }] : [];
       });
     const fade = straddles("hot");
     if (fade.length > 0) {
@@ -107,3 +120,40 @@ export function judgeOnBand(
   return { verdict: out, notes };
 }
 
+
+/** The second pass asks for this much more spread than the first pass's band showed (dimensionless). */
+const SECOND_PASS_SLACK = 1.1;
+
+/**
+ * A rig's advice judged on its bands, searched twice where needed: when a first pass leaves a descent whose
+ * band reaches the fade-likely line with the advice applied, that descent is advised again judging each plan
+ * on its estimated upper edge (settings.bandSpreads, from the first pass's band), so the plan clears the
+ * band's upper edge if any plan can. The second pass is kept only when it leaves fewer such descents and
+ * gives up on no descent the first pass could advise.
+ * @param input as for adviseRig
+ * @param band band settings (default: lib/thermal's)
+ * @returns the advice with its bands, and the band of the run as planned
+ * @example adviseWithBands({ route: profile, descents, rig: UTE_AND_CARAVAN }).advice.verdict
+ */
+export function adviseWithBands(input: AdviseRigInput, band: Partial<BandSettings> = {}): BandedAdvice {
+  const route = "pathM" in input.route ? input.route : prepareRoute(validateRouteProfile(input.route), input.descents);
+  const options = input.options ?? {};
+  const asPlanned = input.asPlanned ?? runPrepared(route, input.rig, options);
+  const first = withBands(route, input.descents, input.rig, options, adviseRig({ ...input, route, asPlanned }), asPlanned, band);
+  const ambientC = asPlanned.model.params.ambientC;
+  const spreads: Record<number, number> = {};
+  for (const note of first.advice.uncertainty) {
+    if (note.line !== "hot") continue;
+    const k = note.hits.map((h) => (h.highC - h.peakC) / Math.max(1, h.peakC - ambientC));
+    spreads[note.descentIndex] = SECOND_PASS_SLACK * Math.max(...k);
+  }
+  if (Object.keys(spreads).length === 0) return first;
+  const settings = { ...input.settings, bandSpreads: spreads };
+  const again = adviseRig({ ...input, route, asPlanned, settings });
+  const second = withBands(route, input.descents, input.rig, options, again, asPlanned, band);
+  const fades = (b: BandedAdvice) => b.advice.uncertainty.filter((n) => n.line === "hot").length;
+  const gaveUp = (b: BandedAdvice) => new Set(b.advice.descents.filter((d) => d.nothingIsEnough).map((d) => d.descentIndex));
+  const firstGaveUp = gaveUp(first);
+  const newlyGivenUp = [...gaveUp(second)].some((i) => !firstGaveUp.has(i));
+  return !newlyGivenUp && fades(second) < fades(first) ? second : first;
+}

@@ -49,6 +49,10 @@ export interface DescentRunner {
   startState: ThermalState;
   /** Settings. */
   settings: AdviceSettings;
+  /** Band spread on this descent (settings.bandSpreads; 0: none), already in each run's outcome margins. */
+  bandSpread: number;
+  /** Whether low range comes before the caution band here (a steep descent with a low range; settings.lowRangeFromGrade). */
+  lowRangeFirst: boolean;
   /** Cached runs by plan key. */
   cache: Map<string, DescentRun>;
 }
@@ -60,6 +64,7 @@ export interface DescentRunner {
  * @param descent the descent
  * @param startState brake state at `leadInIndex`
  * @param context rig, options as planned, resolved model, settings
+ * @param bandSpread band spread on this descent (settings.bandSpreads; default 0)
  * @returns the runner
  * @example descentRunner(route, 3100, descent, state, { rig, base: {}, model, settings })
  */
@@ -69,10 +74,34 @@ export function descentRunner(
   descent: Descent,
   startState: ThermalState,
   context: { rig: Rig; base: HeatRunOptions; model: ResolvedModel; settings: AdviceSettings },
+  bandSpread = 0,
 ): DescentRunner {
   const factor = Math.max(1, Math.round(context.settings.searchStepM / route.profile.stepM));
   const { fine, coarse } = routePieces(route, leadInIndex, descent.endIndex, factor, [descent.startIndex - leadInIndex]);
-  return { descent, ...context, fine, coarse, startState, cache: new Map() };
+  const hasLowRange = context.model.overallRatios.length > context.model.highRangeGears;
+  const lowRangeFirst = hasLowRange && -descent.steepest1kmGrade >= context.settings.lowRangeFromGrade - 1e-9;
+  return { descent, ...context, fine, coarse, startState, bandSpread, lowRangeFirst, cache: new Map() };
+}
+
+/**
+ * An outcome judged on its estimated band edge: each brake's margin to a line becomes the margin of
+ * peak + k·(peak − ambient), so a plan passes only when its upper edge would clear the line.
+ * @param outcome a run's outcome
+ * @param spread band spread k (0: the outcome itself)
+ * @param ambientC ambient temperature, °C
+ * @returns the outcome with the margins of its estimated upper edge (never larger than before)
+ * @example withBandSpread(outcome, 0.5, 25).marginToHotK
+ */
+export function withBandSpread(outcome: RunOutcome, spread: number, ambientC: number): RunOutcome {
+  if (!(spread > 0)) return outcome;
+  let warm = outcome.marginToWarmK;
+  let hot = outcome.marginToHotK;
+  for (const p of outcome.positions) {
+    const high = p.peakC + spread * Math.max(0, p.peakC - ambientC);
+    warm = Math.min(warm, p.warmC - high);
+    hot = Math.min(hot, p.hotC - high);
+  }
+  return { ...outcome, marginToWarmK: warm, marginToHotK: hot };
 }
 
 /**
@@ -92,7 +121,12 @@ export function runPlan(runner: DescentRunner, plan: DrivePlan, atRouteStep: boo
   if (hit) return hit;
   const result = runPrepared(piece, runner.rig, planOptions(runner, plan, piece));
   RUN_COUNTS[piece === runner.fine ? "fine" : "coarse"]++;
-  const run = { piece, result, outcome: outcomeOf(result, runner.descent.startDistanceM, runner.descent.endDistanceM) };
+  const outcome = withBandSpread(
+    outcomeOf(result, runner.descent.startDistanceM, runner.descent.endDistanceM),
+    runner.bandSpread,
+    runner.model.params.ambientC,
+  );
+  const run = { piece, result, outcome };
   runner.cache.set(key, run);
   return run;
 }

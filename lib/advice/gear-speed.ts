@@ -68,8 +68,8 @@ export function speedCandidates(runner: DescentRunner, plannedTopMs: number): nu
 /**
  * Gear advice: the highest gear that keeps every brake below the warm line at the held speed, the held speed
  * capped at the gear's rpm limit, with the converter locked on an automatic. High range first; when even 1st
- * is not enough and the rig has a low range, the highest low-range gear that is (its held speed also capped
- * at the low-range speed cap). A driver reaches for low range only when high range will not do.
+ * is not enough on a steep descent (runner.lowRangeFirst), the highest low-range gear that is (its held speed
+ * also capped at the low-range speed cap). A driver reaches for low range only when high range will not do.
  * @param runner the descent
  * @returns the advice (gear null when no gear is enough)
  * @example gearAdvice(runner).gear // 2
@@ -79,7 +79,7 @@ export function gearAdvice(runner: DescentRunner): GearAdvice {
   const high = model.highRangeGears;
   let found = searchHighest(runner, high, (i) => ({ gear: i + 1 }), "warm");
   let offset = 0;
-  if (found.index < 0 && model.overallRatios.length > high) {
+  if (found.index < 0 && runner.lowRangeFirst) {
     found = searchHighest(runner, model.overallRatios.length - high, (i) => ({ gear: high + i + 1 }), "warm");
     offset = high;
   }
@@ -122,11 +122,12 @@ export function speedAdvice(runner: DescentRunner, speeds: readonly number[]): S
  * A speed with the lowest gear that reaches it within the rpm limit, held (converter locked).
  * @param runner the descent
  * @param speedMs speed, m/s
+ * @param lowRange whether a low-range gear may be chosen (default: on a steep descent with a low range)
  * @returns the plan
  * @example gearForSpeed(runner, 30 / 3.6) // { gear: 1, speedMs: 8.33 }
  */
-export function gearForSpeed(runner: DescentRunner, speedMs: number): DrivePlan {
-  return { gear: descentGear(runner.model, speedMs), speedMs };
+export function gearForSpeed(runner: DescentRunner, speedMs: number, lowRange = runner.lowRangeFirst): DrivePlan {
+  return { gear: descentGear(runner.model, speedMs, lowRange), speedMs };
 }
 
 /**

@@ -13,7 +13,7 @@ export { adviseRig, leadInIndex, type AdviseRigInput } from "./advise-rig";
 export { adviseConvoy, worstCell, type ConvoyAdvice, type ConvoyCell, type ConvoyMember } from "./convoy";
 export { rigVerdict, worstVerdict, VERDICTS } from "./verdict";
 export { adviceOptions, proveAdvice } from "./prove";
-export { withBands, judgeOnBand, type BandedAdvice } from "./band";
+export { adviseWithBands, withBands, judgeOnBand, type BandedAdvice } from "./band";
 export { compareBrakeSetups, withBrakeSetup, type BrakeComparisonRow, type BrakeSetup, type SetupFigures } from "./compare-brakes";
 export { stopDuration, stopTargets } from "./stop-plan";
 export { shortfallOf } from "./shortfall";

@@ -5,6 +5,25 @@
 
 /** Settings of the advice engine. */
 export interface AdviceSettings {
+  /**
+   * Descents at least this steep over their steepest 1 km (dimensionless, positive) are where 4x4 drivers
+   * reach for low range before accepting the caution band in high range; on gentler descents low range is
+   * the last resort (common practice, no published source).
+   */
+  lowRangeFromGrade: number;
+  /**
+   * Longest total stop time added to a plan that already keeps every brake below the fade-likely line, only to
+   * bring them below the caution line, s: a short breather is worth it, half an hour before a short descent is
+   * not (a plan may leave the brakes in the caution band; common practice, no published source).
+   */
+  cautionStopMaxS: number;
+  /**
+   * Band spread per descent index (dimensionless): the band's upper edge above the peak, over the peak's rise
+   * above ambient, k = (high − peak)/(peak − ambient). Set when a first pass's band reached the fade line with
+   * the advice applied: the second pass then takes a plan as below a line only when its estimated upper edge,
+   * peak + k·(peak − ambient), is (band.ts). Empty: none.
+   */
+  bandSpreads: Readonly<Record<number, number>>;
   /** Distance before the crest from which a descent is re-run (the slowing for the crest happens here), m. */
   leadInM: number;
   /** Model step of the searches, m: the route is coarsened to about this step (thermal-model.md §1.1: ≤ 50–100 m). */
@@ -47,6 +66,9 @@ export interface AdviceSettings {
 
 /** The defaults [E]. */
 export const DEFAULT_ADVICE_SETTINGS: Readonly<AdviceSettings> = {
+  lowRangeFromGrade: 0.12,
+  cautionStopMaxS: 600,
+  bandSpreads: {},
   leadInM: 500,
   searchStepM: 50,
   doubtK: 5,

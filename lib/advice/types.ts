@@ -230,8 +230,8 @@ export interface BandNote {
   descentIndex: number;
   /** The line the band's upper edge reaches while the nominal stays below it. */
   line: AdviceLine;
-  /** Each brake that could reach it: its upper edge and its line, °C. */
-  hits: { position: BrakePosition; highC: number; limitC: number }[];
+  /** Each brake that could reach it: its peak, its upper edge and its line, °C. */
+  hits: { position: BrakePosition; peakC: number; highC: number; limitC: number }[];
 }
 
 /** Advice for one rig over a route. */

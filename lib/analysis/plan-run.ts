@@ -4,7 +4,7 @@
  * isomorphic: the server's worker runs it for stored results, and the same code can run in the browser.
  */
 
-import { adviseRig, withBands, type RigAdvice } from "@/lib/advice";
+import { adviseWithBands, type RigAdvice } from "@/lib/advice";
 import type { Region } from "@/lib/compliance";
 import type { Descent, PlacedWaypoint, RouteProfile } from "@/lib/route";
 import { prepareRoute, runPrepared, validateRouteProfile, type HeatRunOptions, type PreparedRoute, type Rig } from "@/lib/thermal";
@@ -40,8 +40,7 @@ export function runPlanRig(
   region: Region | null = null,
 ): PlanRigResult {
   const asPlanned = runPrepared(route, rig, options);
-  const raw = adviseRig({ route, descents, rig, options, waypoints, asPlanned, region });
-  const { advice, plannedBand } = withBands(route, descents, rig, options, raw, asPlanned);
+  const { advice, plannedBand } = adviseWithBands({ route, descents, rig, options, waypoints, asPlanned, region });
   const analysis = summarizeAnalysis(profile, descents, asPlanned, "sampled", plannedBand);
   return { analysis, advice };
 }

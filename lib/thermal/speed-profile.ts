@@ -141,14 +141,15 @@ const LOW_RANGE_GAIN = 1.15;
  * least 15 % larger, so it brakes noticeably more; otherwise changing range is not worth it).
  * @param model resolved model
  * @param speedMs held speed, m/s
+ * @param lowRange whether a low-range gear may be chosen (default true)
  * @returns 1-based gear (above model.highRangeGears: low range)
  * @example descentGear(model, 10 / 3.6) // 7 (low range, 1st) for a 6-speed with a low range
  */
-export function descentGear(model: ResolvedModel, speedMs: number): number {
+export function descentGear(model: ResolvedModel, speedMs: number, lowRange = true): number {
   const { overallRatios: ratios, highRangeGears: G, tyreDiameterM: d } = model;
   const maxRpm = model.params.maxRpm ?? 0;
   const high = chooseDescentGear(speedMs, ratios.slice(0, G), d, maxRpm);
-  if (ratios.length <= G || speedMs > model.params.lowRangeMaxSpeedMs + 1e-9) return high + 1;
+  if (!lowRange || ratios.length <= G || speedMs > model.params.lowRangeMaxSpeedMs + 1e-9) return high + 1;
   const low = chooseDescentGear(speedMs, ratios.slice(G), d, maxRpm);
   const lowRatio = ratios[G + low] as number;
   const fits = engineRpm(speedMs, lowRatio, d) <= maxRpm;

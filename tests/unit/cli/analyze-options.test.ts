@@ -107,9 +107,17 @@ describe("--set", () => {
   }, 30_000);
 });
 
+/** The preset ute and caravan without a low range (a 2WD tow vehicle), whose advice on the demo pass has stops. */
+function twoWheelDriveRig(): string {
+  const { lowRangeRatio: _dropped, ...transmission } = UTE_AND_CARAVAN.vehicle.transmission;
+  const file = join(tmpdir(), `rig-2wd-${process.pid}.json`);
+  writeFileSync(file, JSON.stringify({ ...UTE_AND_CARAVAN, vehicle: { ...UTE_AND_CARAVAN.vehicle, transmission } }));
+  return file;
+}
+
 describe("--advice", () => {
   it("adds the verdict and every cool-down stop as an object with atM and durationS", () => {
-    const r = json(GPX, ...RIG, "--advice");
+    const r = json(GPX, "--rig", twoWheelDriveRig(), "--advice");
     expect(["clear", "clear with advice", "not advised"]).toContain(r.advice.verdict);
     expect(r.advice.descents.length).toBeGreaterThan(0);
     expect(r.advice.stops.length).toBeGreaterThan(0);
