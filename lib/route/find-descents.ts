@@ -29,7 +29,14 @@ export interface Descent {
 export interface FindDescentsOptions {
   /** Least height lost, m. Default 60. */
   minDropM?: number;
-  /** Least length, m. Default 1000. */
+  /**
+   * Least length, m. Default 250. [E] With the 60 m least drop this binds only on pitches steeper than
+   * 24 % (60 m / 250 m), so any real road that loses 60 m counts however short it is (500 m at 20 %,
+   * 400 m at 15 %; docs/model.md §4.2): for a heavy rig the height lost, not the length, is what heats the
+   * brakes. What it still refuses is a "drop" shorter than the elevation smoothing's own footprint
+   * (about ±2σ = 160 m at the default σ of 40 m, see smoothElevation), which on a recorded track is an
+   * elevation artefact (a bridge, a tunnel, a cliff edge in an elevation model) rather than a road.
+   */
   minLengthM?: number;
   /** Greatest rise above the lowest point so far that does not end the descent, m. Default 10. */
   maxRiseM?: number;
@@ -59,7 +66,9 @@ const EPS_M = 1e-9;
  *    at the last low.
  * 3. It is trimmed to start at its highest point and then past any leading or trailing steps gentler than
  *    `minGrade`, so it runs from where the road starts to fall to where it stops.
- * 4. It counts when it drops at least `minDropM` over at least `minLengthM` (defaults: 60 m over 1 km).
+ * 4. It counts when it drops at least `minDropM` over at least `minLengthM` (defaults: 60 m over at least
+ *    250 m), so a short steep pitch counts (500 m at 20 %) while a long gentle slope does not (1 km at
+ *    3 % loses only 30 m).
  *
  * @param profile from {@link buildRouteProfile}
  * @param options the rules' thresholds
@@ -70,7 +79,7 @@ const EPS_M = 1e-9;
 export function findDescents(profile: RouteProfile, options: FindDescentsOptions = {}): Descent[] {
   const rules: Rules = {
     minDropM: options.minDropM ?? 60,
-    minLengthM: options.minLengthM ?? 1000,
+    minLengthM: options.minLengthM ?? 250,
     maxRiseM: options.maxRiseM ?? 10,
     maxInterruptionM: options.maxInterruptionM ?? 300,
     minGrade: options.minGrade ?? 0.01,

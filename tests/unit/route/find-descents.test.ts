@@ -30,8 +30,20 @@ describe("findDescents: the documented rules", () => {
     expect(findDescents(rawProfile([3000], legs(1000, [FLAT, [1000, -0.05], FLAT])))).toEqual([]);
   });
 
-  it("a 60 m drop over only 500 m (a short steep pitch) is not a descent", () => {
-    expect(findDescents(rawProfile([3000], legs(1000, [FLAT, [500, -0.12], FLAT])))).toEqual([]);
+  it("a short steep pitch is a descent: 500 m at 20 % (100 m) and 400 m at 15 % (60 m)", () => {
+    const pitch = findDescents(rawProfile([3000], legs(1000, [FLAT, [500, -0.2], FLAT])));
+    expect(pitch).toMatchObject([{ startDistanceM: 1000, endDistanceM: 1500, dropM: expect.closeTo(100, 9) }]);
+    const shorter = findDescents(rawProfile([3000], legs(1000, [FLAT, [400, -0.15], FLAT])));
+    expect(shorter).toMatchObject([{ startDistanceM: 1000, endDistanceM: 1400, dropM: expect.closeTo(60, 9) }]);
+  });
+
+  it("a long gentle slope is not a descent: 1 km at 3 % loses only 30 m", () => {
+    expect(findDescents(rawProfile([3000], legs(1000, [FLAT, [1000, -0.03], FLAT])))).toEqual([]);
+  });
+
+  it("the least length is 250 m: 70 m lost over 240 m (29 %) does not count, over 250 m (28 %) it does", () => {
+    expect(findDescents(rawProfile([3000], legs(1000, [FLAT, [240, -70 / 240], FLAT])))).toEqual([]);
+    expect(findDescents(rawProfile([3000], legs(1000, [FLAT, [250, -70 / 250], FLAT])))).toHaveLength(1);
   });
 
   it("tolerates a short rise (8 m over 100 m) inside a descent", () => {

@@ -82,3 +82,86 @@ export function rollingRoad(distanceM: number): number {
   const x = distanceM / 1000;
   return 800 + 350 * Math.sin(x / 7) + 120 * Math.sin(x / 1.9 + 1) + 25 * Math.sin(x / 0.45);
 }
+
+/**
+ * A gently winding planar path: the heading swings as `swingRad`·sin(s / `waveM`) along the arc length s,
+ * so the tightest radius is waveM / swingRad (1 km by default, a straight for any speed a rig drives).
+ * Points every `spacingM` along the arc, as (east, north) in m.
+ */
+export function windingXY(lengthM: number, spacingM: number, swingRad = 0.6, waveM = 600): Array<[number, number]> {
+  const out: Array<[number, number]> = [[0, 0]];
+  const sub = 10; // sub-steps per point: the midpoint rule integrates the heading to well under 1 mm
+  let e = 0;
+  let n = 0;
+  const count = Math.round(lengthM / spacingM);
+  for (let k = 0; k < count; k++) {
+    for (let j = 0; j < sub; j++) {
+      const s = (k + (j + 0.5) / sub) * spacingM;
+      const heading = swingRad * Math.sin(s / waveM);
+      e += (spacingM / sub) * Math.cos(heading);
+      n += (spacingM / sub) * Math.sin(heading);
+    }
+    out.push([e, n]);
+  }
+  return out;
+}
+
+/**
+ * Slowly drifting noise, as recorded GPS position errors are: a first-order autoregressive sequence
+ * x(k+1) = ρ·x(k) + √(1 − ρ²)·σ·n(k), ρ = exp(−spacingM / correlationM), stationary with standard
+ * deviation σ (G. E. P. Box and G. M. Jenkins, "Time Series Analysis", 1970, AR(1) process).
+ * `correlationM` = 0 gives independent noise.
+ */
+export function driftingNoise(normal: () => number, count: number, sigma: number, spacingM: number, correlationM: number): Float64Array {
+  const rho = correlationM > 0 ? Math.exp(-spacingM / correlationM) : 0;
+  const out = new Float64Array(count);
+  let x = sigma * normal();
+  for (let k = 0; k < count; k++) {
+    out[k] = x;
+    x = rho * x + Math.sqrt(1 - rho * rho) * sigma * normal();
+  }
+  return out;
+}
+
+/** GPS-like errors to add to a recorded track. Lengths and σ in m. */
+export interface TrackNoise {
+  seed: number;
+  /** Horizontal σ per axis, m, and its correlation length along the track, m (0: independent). */
+  horizontalM: number;
+  horizontalCorrelationM: number;
+  /** Elevation σ, m (independent from point to point). */
+  elevationM: number;
+  /** One elevation spike (±`spikeM`, one or two points wide) about every `spikeEveryM` of track. */
+  spikeM?: number;
+  spikeEveryM?: number;
+}
+
+/**
+ * A recorded track along the planar path `xy` (points `spacingM` apart) with elevation `elevation(d)` of
+ * the true distance d along the path, plus the given noise (or none). Seeded, so every run is the same.
+ */
+export function recordedPoints(
+  xy: ReadonlyArray<readonly [number, number]>,
+  spacingM: number,
+  elevation: (distanceM: number) => number,
+  noise?: TrackNoise,
+): GpxPoint[] {
+  if (noise === undefined) return pathPoints(xy, elevation);
+  const normal = gaussian(mulberry32(noise.seed));
+  const uniform = mulberry32(noise.seed + 1000);
+  const n = xy.length;
+  const de = driftingNoise(normal, n, noise.horizontalM, spacingM, noise.horizontalCorrelationM);
+  const dn = driftingNoise(normal, n, noise.horizontalM, spacingM, noise.horizontalCorrelationM);
+  const eleNoise = driftingNoise(normal, n, noise.elevationM, spacingM, 0);
+  const spikeChance = noise.spikeM && noise.spikeEveryM ? spacingM / noise.spikeEveryM : 0;
+  for (let k = 0; k < n; k++) {
+    if (uniform() < spikeChance) {
+      const size = (uniform() < 0.5 ? -1 : 1) * (noise.spikeM as number);
+      const width = uniform() < 0.5 ? 1 : 2;
+      for (let j = k; j < Math.min(n, k + width); j++) eleNoise[j] = (eleNoise[j] as number) + size;
+    }
+  }
+  const moved = xy.map(([e, nn], k) => [e + (de[k] as number), nn + (dn[k] as number)] as [number, number]);
+  // Elevation by the true distance along the path (k·spacingM), not the noisy one.
+  return pathPoints(moved, () => 0).map((p, k) => ({ ...p, eleM: elevation(k * spacingM) + (eleNoise[k] as number) }));
+}
