@@ -20,12 +20,14 @@ pg_prepare_dir() {
       log "PostgreSQL cannot reach $LOCAL as user postgres; the cluster lives in $elsewhere"
     fi
     mkdir -p "$PGROOT" && chown -R postgres:postgres "$PGROOT/" && chmod 700 "$PGROOT/"
+    # Every command run as postgres must use the real folder, never the link inside the private clone.
+    PGROOT="$(readlink -f "$PGROOT")"
   else
     mkdir -p "$PGROOT" && chmod 700 "$PGROOT"
   fi
 }
 
-as_pg() { if is_root; then su postgres -s /bin/sh -c "$*"; else sh -c "$*"; fi; }
+as_pg() { if is_root; then su postgres -s /bin/sh -c "cd / && $*"; else sh -c "$*"; fi; }
 
 ensure_postgres_running() {
   ensure_postgres_installed
@@ -71,7 +73,7 @@ recreate_database() { # name
 }
 
 stop_postgres() {
-  PGBIN="$(pg_bin_dir)"; PGROOT="$LOCAL/pg"
+  PGBIN="$(pg_bin_dir)"; PGROOT="$(readlink -f "$LOCAL/pg" 2>/dev/null || printf '%s' "$LOCAL/pg")"
   [ -n "$PGBIN" ] && [ -f "$PGROOT/data/PG_VERSION" ] || return 0
   as_pg "'$PGBIN/pg_ctl' -D '$PGROOT/data' -m fast -w stop" >/dev/null 2>&1 && log "PostgreSQL stopped" || true
 }

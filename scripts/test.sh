@@ -12,10 +12,13 @@ recreate_database fadeline_test
 load_env_file
 # Test settings override .env: their own database, mail fake, port and build folder.
 export DATABASE_URL="${DATABASE_URL%/*}/fadeline_test"
-export TEST_PORT=3100
+# Every port can be set from the environment, so two clones can test side by side.
+export TEST_PORT="${TEST_PORT:-3100}"
+TEST_SMTP_PORT="${TEST_SMTP_PORT:-2526}"
+TEST_INBOX_PORT="${TEST_INBOX_PORT:-2581}"
 export NEXTAUTH_URL="http://127.0.0.1:$TEST_PORT"
-export SMTP_URL="smtp://127.0.0.1:2526"
-export DEV_MAIL_INBOX_URL="http://127.0.0.1:2581"
+export SMTP_URL="smtp://127.0.0.1:$TEST_SMTP_PORT"
+export DEV_MAIL_INBOX_URL="http://127.0.0.1:$TEST_INBOX_PORT"
 export FADELINE_DEV_INBOX=1
 export NEXT_DIST_DIR=.next-test
 export CHROMIUM_PATH="${CHROMIUM_PATH:-/usr/bin/chromium}"
@@ -23,7 +26,7 @@ export CHROMIUM_PATH="${CHROMIUM_PATH:-/usr/bin/chromium}"
 port_open "$TEST_PORT" && die "Port $TEST_PORT is in use; the browser tests serve the app there."
 
 stop_mail_fake test
-start_mail_fake 2526 2581 test
+start_mail_fake "$TEST_SMTP_PORT" "$TEST_INBOX_PORT" test
 trap 'stop_mail_fake test' EXIT
 migrate_and_seed
 build_tiles
