@@ -30,6 +30,8 @@ export function trailerNoteText(
         (advice.gainOneOutcome ? ` With the gain at 1.0: ${result(advice.gainOneOutcome)}.` : "");
     case "check-trailer-brakes":
       return `The ${noun}'s brakes take ${pct(advice.trailerHeatShare)} of the heat for ${pct(advice.idealHeatShare)} of the weight although the gain is at 1.0: have them checked (adjustment, magnets, wiring).`;
+    case "trailer-fades":
+      return `As planned the ${noun}'s drums pass their fade-likely line and lose grip, so the tow vehicle's brakes take over their work (${pct(advice.trailerHeatShare)} of the heat for ${pct(advice.idealHeatShare)} of the weight) and heat faster from there.`;
     case "gain-trade-off":
       return `A higher gain moves heat into the ${noun}'s drums and bearings; the trade has not settled how far to go.`;
     case "override-drags-under-engine-braking":

@@ -1,5 +1,7 @@
 /**
  * Trailer-brake advice on one descent (trade-facts.md §2, "Brake controllers"):
+ * - Drums that pass their fade-likely line lose grip and hand their work to the tow vehicle (fade feedback,
+ *   docs/model.md): a low heat share then is the fade, not a controller to check, and the note says so.
  * - Electric and electric-over-hydraulic brakes follow the stop-light circuit, so engine braking alone does not
  *   apply them. When the trailer does less than its share (its heat share below 80 % of its mass share), or the
  *   tow vehicle reaches the warm line while the trailer stays cool, advise checking the controller gain; with
@@ -34,7 +36,10 @@ export function trailerAdvice(runner: DescentRunner, asPlanned: DescentRun): Tra
     return { ...base, notes: ["override-drags-under-engine-braking", "override-ease-off"] };
   }
   const notes: TrailerNote[] = ["electric-not-on-engine-braking"];
-  if (!doesLittle(asPlanned, shares)) return { ...base, notes };
+  // Fading drums explain a low share; an under-set controller is still worth a note.
+  const fading = fades(asPlanned);
+  if (fading) notes.push("trailer-fades");
+  if (fading ? gain >= 1 : !doesLittle(asPlanned, shares)) return { ...base, notes };
   if (gain >= 1) return { ...base, notes: [...notes, "check-trailer-brakes"] };
   const gainOne = runPlan(runner, { trailerGain: 1 }, runner.settings.verifyAtRouteStep).outcome;
   return { ...base, notes: [...notes, "check-raise-gain", "gain-trade-off"], gainOneOutcome: gainOne };
@@ -53,6 +58,12 @@ function heatShares(run: DescentRun, runner: DescentRunner): { trailerHeatShare:
     if (j >= 0) trailer += t.energy.brakeJ[j]![k] as number;
   }
   return { trailerHeatShare: total > 0 ? trailer / total : 0, idealHeatShare: runner.model.trailerMassShare };
+}
+
+/** @private The trailer's drums reach their fade-likely line in the run. */
+function fades(run: DescentRun): boolean {
+  const trailer = run.outcome.positions.find((p) => p.position === "trailer");
+  return trailer !== undefined && trailer.peakC >= trailer.hotC;
 }
 
 /** @private The trailer does little: a low heat share, or the tow vehicle warm while the trailer stays cool. */

@@ -125,6 +125,7 @@ export type TrailerNote =
   | "electric-not-on-engine-braking"
   | "check-raise-gain"
   | "check-trailer-brakes"
+  | "trailer-fades"
   | "gain-trade-off"
   | "override-drags-under-engine-braking"
   | "override-ease-off"
