@@ -7,7 +7,11 @@
 
 import { describe, expect, it } from "vitest";
 import {
+  brakeConductanceScale,
+  convectiveConductance,
   DEFAULT_VALIDITY_CEILINGS_C,
+  REFERENCE_HA0_W_PER_K,
+  REFERENCE_HA_SLOPE,
   kmhToMs,
   runHeatRun,
   splitRetardingWork,
@@ -239,5 +243,19 @@ describe("stability across the resampling step (5, 10, 20 m) on a clean profile"
         expect(Math.abs(c!.positions[j]!.peakC - p.peakC)).toBeLessThan(2);
       });
     }
+  });
+});
+
+describe("caravan drums (docs/model.md, drums)", () => {
+  it("a 12 in (305 mm) drum's convection at 60 km/h is within 15 % of a drum correlation: h ≈ 0.10·(k/D)·Re^(2/3) on 0.10 m² (Limpert, Brake Design and Safety, ch. 3; from memory, low confidence)", () => {
+    const v = kmhToMs(60);
+    const D = 0.305;
+    // air near 60 °C: ν ≈ 1.9e-5 m²/s, k ≈ 0.028 W/(m·K) (property tables, from memory)
+    const re = (v * D) / 1.9e-5;
+    const hA = 0.1 * (0.028 / D) * re ** (2 / 3) * 0.1;
+    expect(hA).toBeCloseTo(3.8, 1); // the worked value in docs/model.md
+    const scale = brakeConductanceScale("drum", D);
+    const model = convectiveConductance(REFERENCE_HA0_W_PER_K * scale, REFERENCE_HA_SLOPE * scale, v);
+    expect(Math.abs(model - hA) / hA).toBeLessThan(0.15);
   });
 });
