@@ -34,20 +34,26 @@ const CREST_M = 100;
  * @param startM crest, m
  * @param endM bottom, m
  * @param line warm or hot
+ * @param bandSpread band spread k of the descent (0: the lines themselves; descent-runner withBandSpread)
  * @returns index into the run's trace, or −1
  * @example firstCrossing(result, 31_640, 41_020, "hot")
  */
-export function firstCrossing(result: HeatRunResult, startM: number, endM: number, line: AdviceLine): number {
+export function firstCrossing(result: HeatRunResult, startM: number, endM: number, line: AdviceLine, bandSpread = 0): number {
   const t = result.trace;
   const P = result.positions.length;
+  const ambient = result.model.params.ambientC;
+  // With a band spread k, a brake crosses where its estimated upper edge does: peak + k·(peak − ambient).
+  const limits = result.positions.map((spec) => {
+    const line0 = line === "warm" ? spec.thresholds.warmC : spec.thresholds.hotC;
+    return ambient + (line0 - ambient) / (1 + (bandSpread > 0 ? bandSpread : 0));
+  });
   for (let k = 0; k < t.length; k++) {
     const d = t.distanceM[k] as number;
     if (d < startM) continue;
     if (d > endM) break;
     for (let j = 0; j < P; j++) {
       const spec = result.positions[j]!;
-      const limit = line === "warm" ? spec.thresholds.warmC : spec.thresholds.hotC;
-      if ((t.rotorC[j]![k] as number) >= limit) return k;
+      if ((t.rotorC[j]![k] as number) >= (limits[j] as number)) return k;
       if (spec.fluid && (t.fluidC[j]![k] as number) >= spec.fluid.boilC) return k;
     }
   }

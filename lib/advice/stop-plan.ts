@@ -44,7 +44,7 @@ export function planStops(
   const stops: PlannedStop[] = [];
   let current = runPlan(runner, basePlan, false);
   for (let n = 0; n < settings.maxStops; n++) {
-    const crossing = firstCrossing(current.result, descent.startDistanceM, descent.endDistanceM, line);
+    const crossing = firstCrossing(current.result, descent.startDistanceM, descent.endDistanceM, line, runner.bandSpread);
     if (crossing < 0) break;
     const lastM = stops.at(-1)?.atM;
     const fromM = lastM === undefined ? (runner.fine.profile.distanceM[0] as number) + 100 : lastM + settings.minStopSpacingM;
@@ -105,7 +105,7 @@ function placeStop(route: PreparedRoute, runner: DescentRunner, c: StopContext):
   }
   if (last === null) return null;
   const arrivalC = last.arrivalC ?? arrivalAt(runner, c.basePlan, c.stops, last.spot.atM, c.atRouteStep);
-  const proven = proveStop(runner, c.basePlan, c.stops, last.spot.atM, arrivalC, c.targets, c.atRouteStep);
+  const proven = proveStop(runner, c.basePlan, c.stops, last.spot.atM, arrivalC, c.targets, c.atRouteStep, c.line);
   return { stop: { ...proven.stop, place: last.spot.place }, run: proven.run };
 }
 
@@ -179,9 +179,13 @@ export function arrivalAt(
   return result.trace.rotorC.map((c) => c[k] as number);
 }
 
+/** Steps in which a stop that is enough is shortened, s (whole minutes, as the advice quotes them). */
+const SHORTEN_STEP_S = 300;
+
 /**
  * @private Run the descent with one more stop, as long as the cooling model needs from its arrival state
- * (which the stop's own length does not change, see arrivalAt).
+ * (which the stop's own length does not change, see arrivalAt). When that keeps the descent below the line,
+ * the stop is cut to the shortest 5-minute step that still does: a driver stops no longer than needed.
  */
 function proveStop(
   runner: DescentRunner,
@@ -191,11 +195,24 @@ function proveStop(
   arrivalC: readonly number[],
   targets: number[],
   atRouteStep: boolean,
+  line: AdviceLine,
 ): { run: DescentRun; stop: Omit<PlannedStop, "place"> } {
   const { model, settings } = runner;
   const duration = stopDuration(model, arrivalC, targets, settings);
-  const run = runPlan(runner, { ...basePlan, stops: [...stops, { atM, durationS: duration.durationS }] }, atRouteStep);
-  const stop = { atM, durationS: duration.durationS, arrivalC: stateAt(run, atM), targetC: targets, modelTimeS: duration.modelTimeS, capped: duration.capped };
+  const runFor = (durationS: number) => runPlan(runner, { ...basePlan, stops: [...stops, { atM, durationS }] }, atRouteStep);
+  let durationS = duration.durationS;
+  let run = runFor(durationS);
+  if (isBelow(run.outcome, line)) {
+    for (let d = settings.minStopS; d < durationS; d += SHORTEN_STEP_S) {
+      const shorter = runFor(d);
+      if (isBelow(shorter.outcome, line)) {
+        durationS = d;
+        run = shorter;
+        break;
+      }
+    }
+  }
+  const stop = { atM, durationS, arrivalC: stateAt(run, atM), targetC: targets, modelTimeS: duration.modelTimeS, capped: duration.capped };
   return { run, stop };
 }
 

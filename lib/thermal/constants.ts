@@ -11,7 +11,8 @@
  * - 2.0.0: fade feedback (a fading brake hands work to the others; electric trailer brakes through the
  *   controller, override brakes through the coupling push), hold capacity and the runaway class past a validity
  *   ceiling per disc and drum, one held speed per descent (a dip that is not a descent keeps the cruise speed),
- *   a transfer case's low range, every brake mass scalable.
+ *   coasting instead of braking where a climb slows the rig, a transfer case's low range, every brake mass
+ *   scalable.
  * - 1.1.0: stretch controls (HeatRunOptions.controls, range-controls.ts): a held-speed cap and a held gear
  *   (converter locked) on one stretch of the route, so advice is re-run on one descent only. Runs without
  *   controls give the same numbers as 1.0.0.

@@ -9,10 +9,17 @@
  * constant descent speed (thermal-model.md §1.2).
  */
 
+import { STANDARD_GRAVITY } from "./constants";
 import { chooseDescentGear, engineRpm } from "./engine";
 import type { PreparedRoute } from "./prepare-route";
 import type { ControlColumns } from "./range-controls";
 import type { ResolvedModel } from "./resolve";
+
+/**
+ * Least coasting deceleration at which a driver slowing down lifts off and coasts instead of braking, m/s²
+ * [E]: about a 4 % climb with a heavy rig's rolling resistance. On flatter road the rig brakes at decelMs2.
+ */
+export const COAST_MIN_DECEL_MS2 = 0.5;
 
 /** Slack on the tier grades (dimensionless): a grade built as exactly 7 % must reach the 7 % tier. */
 export const GRADE_SLACK = 1e-9;
@@ -110,10 +117,24 @@ export function heldSpeeds(
     const reach = Math.sqrt(vi * vi + twoA * (route.pathM[i] as number));
     if (reach < (v[i + 1] as number)) v[i + 1] = reach;
   }
+  // Slowing down, the driver lets the road do what it can: where coasting alone (gravity on a climb, rolling
+  // resistance and drag) slows the rig by at least COAST_MIN_DECEL_MS2, the driver lifts off earlier and
+  // coasts down to the lower speed instead of braking (docs/model.md, "Held speed"); elsewhere the rig
+  // brakes at decelMs2.
+  const g = STANDARD_GRAVITY;
+  const crrG = (params.rollingResistance ?? 0) * g;
+  const dragPerV2 = (0.5 * (params.cdaM2 ?? 0)) / model.effectiveMassKg;
   for (let i = n - 2; i >= 0; i--) {
     if (gap[i] === 1) continue;
     const vn = v[i + 1] as number;
-    const reach = Math.sqrt(vn * vn + twoD * (route.pathM[i] as number));
+    const path = route.pathM[i] as number;
+    let twoA = twoD;
+    if (path > 0) {
+      const coast = (-g * (route.dropM[i] as number) + crrG * (route.runM[i] as number)) / path +
+        dragPerV2 * (route.densityKgM3[i] as number) * vn * vn;
+      if (coast >= COAST_MIN_DECEL_MS2 && coast < params.decelMs2) twoA = 2 * coast;
+    }
+    const reach = Math.sqrt(vn * vn + twoA * path);
     if (reach < (v[i] as number)) v[i] = reach;
   }
   return v;

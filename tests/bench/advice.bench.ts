@@ -2,6 +2,8 @@
  * Benchmarks of lib/advice (issue 5): figures only, never asserted.
  * (a) a 12-rig convoy advised on a synthetic 300 km mountain route at 10 m steps (30,001 samples, six long
  *     descents), advice, proofs and verdict included: goal ≤ 300 ms (server).
+ * (c) the same convoy as the plan page computes it: heat runs, advice and the uncertainty bands (with the
+ *     second advice pass where a band reaches the fade line), through runPlanJob: goal ≤ 300 ms (server).
  * (b) a what-if for one rig on the same route: one runPrepared on the prepared route with one option changed
  *     (ambient temperature, or a held gear on one descent): goal ≤ 16 ms (browser, one frame).
  * Run: `npx vitest bench --run --project unit tests/bench/advice.bench.ts` (also part of `npm run bench`).
@@ -10,6 +12,7 @@
 
 import { bench, describe } from "vitest";
 import { adviseConvoy } from "@/lib/advice";
+import { runPlanJob } from "@/lib/analysis/plan-run";
 import { RUN_COUNTS } from "@/lib/advice/descent-runner";
 import { prepareRoute, runPrepared, UTE_AND_CARAVAN, validateRouteProfile } from "@/lib/thermal";
 import { convoy12, mountainRoute300 } from "./advice-fixtures";
@@ -42,6 +45,17 @@ describe("lib/advice, 300 km at 10 m, 6 long descents", () => {
       adviseConvoy({ route, descents, members });
     },
     { iterations: 5, time: 0, warmupIterations: 1, warmupTime: 0 },
+  );
+});
+
+describe("plan job, 300 km at 10 m, 6 long descents", () => {
+  const job = { kind: "plan" as const, profile, descents, waypoints: [], members: members.map((m) => ({ rig: m.rig, options: {} })) };
+  bench(
+    "(c) 12-rig convoy with advice and bands (goal ≤ 300 ms)",
+    () => {
+      runPlanJob(job);
+    },
+    { iterations: 3, time: 0, warmupIterations: 1, warmupTime: 0 },
   );
 });
 

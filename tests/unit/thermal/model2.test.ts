@@ -259,3 +259,21 @@ describe("caravan drums (docs/model.md, drums)", () => {
     expect(Math.abs(model - hA) / hA).toBeLessThan(0.15);
   });
 });
+
+describe("slowing on a climb: the driver coasts instead of braking (docs/model.md, held speed)", () => {
+  it("a tight bend on a 7 % climb slows the rig with no brake work; the same bend on the flat needs the brakes", () => {
+    const bend = (grade: number) =>
+      stretchesProfile([
+        { lengthM: 2000, grade },
+        { lengthM: 100, grade, curveRadiusM: 60 },
+        { lengthM: 1000, grade },
+      ]);
+    const work = (r: HeatRunResult) => r.trace.energy.brakeJ.reduce((a, col) => a + sum(col), 0);
+    const climb = runHeatRun(bend(0.07), UTE_AND_CARAVAN);
+    const flat = runHeatRun(bend(0), UTE_AND_CARAVAN);
+    const slowest = (r: HeatRunResult) => Math.min(...r.trace.speedMs.subarray(200, 210));
+    expect(slowest(climb)).toBeCloseTo(Math.sqrt(2 * 60), 6); // the bend's curve speed, √(a_lat·R)
+    expect(work(climb)).toBe(0);
+    expect(work(flat)).toBeGreaterThan(0);
+  });
+});
