@@ -107,13 +107,23 @@ function combinedPlan(
   let base = coolestBelowHot(runner, candidates);
   const everyGear = Array.from({ length: runner.model.overallRatios.length }, (_, i): DrivePlan => ({ gear: i + 1 }));
   const every = [...everyGear, ...speeds.map((v) => gearForSpeed(runner, v, true))];
-  // Low range when high range cannot keep the brakes below the fade-likely line.
-  if (base === null && every.length > candidates.length) base = coolestBelowHot(runner, every);
+  // Low range when high range cannot keep the brakes below the fade-likely line: the highest low-range gear
+  // that keeps them below the caution line (crawling slower than needed is no better), else the coolest.
+  if (base === null && every.length > candidates.length) base = lowRangeBelowWarm(runner) ?? coolestBelowHot(runner, every);
   if (base === null) return lastResort(route, runner, stop, every, waypoints);
   const withStops = exploreStops(route, runner, base, "warm", waypoints);
   const stopTimeS = withStops === null ? Infinity : withStops.stops.reduce((t, x) => t + x.durationS, 0);
   if (withStops === null || stopTimeS > runner.settings.cautionStopMaxS) return { ...none, plan: base };
   return { plan: { ...base, stops: withStops.stops.map(stripStop) }, stops: withStops.stops, nothingIsEnough: false };
+}
+
+/** @private The highest low-range gear (held) that keeps every brake below the warm line, or null. */
+function lowRangeBelowWarm(runner: DescentRunner): DrivePlan | null {
+  const high = runner.model.highRangeGears;
+  const count = runner.model.overallRatios.length - high;
+  if (count <= 0) return null;
+  const found = searchHighest(runner, count, (i) => ({ gear: high + i + 1 }), "warm");
+  return found.index >= 0 ? { gear: high + found.index + 1 } : null;
 }
 
 /** @private Step 3's base: the candidate furthest below the hot line (search step), confirmed at the route's step. */
