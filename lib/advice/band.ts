@@ -121,15 +121,17 @@ export function judgeOnBand(
 }
 
 
-/** The second pass asks for this much more spread than the first pass's band showed (dimensionless). */
-const SECOND_PASS_SLACK = 1.1;
+/** Each further pass asks for this much more spread than the band showed (dimensionless). */
+const PASS_SLACK = 1.1;
+/** Most passes of the advice search (the first included). */
+const MAX_PASSES = 3;
 
 /**
- * A rig's advice judged on its bands, searched twice where needed: when a first pass leaves a descent whose
- * band reaches the fade-likely line with the advice applied, that descent is advised again judging each plan
- * on its estimated upper edge (settings.bandSpreads, from the first pass's band), so the plan clears the
- * band's upper edge if any plan can. The second pass is kept only when it leaves fewer such descents and
- * gives up on no descent the first pass could advise.
+ * A rig's advice judged on its bands, searched again where needed: when a pass leaves a descent whose band
+ * reaches the fade-likely line with the advice applied, that descent is advised again judging each plan on
+ * its estimated upper edge (settings.bandSpreads: the spread the band showed, × 1.1, and at least 1.5 × the
+ * spread already asked for), up to three passes in all. The pass kept is the one with the fewest such
+ * descents that gives up on no descent the first pass could advise.
  * @param input as for adviseRig
  * @param band band settings (default: lib/thermal's)
  * @returns the advice with its bands, and the band of the run as planned
@@ -139,21 +141,27 @@ export function adviseWithBands(input: AdviseRigInput, band: Partial<BandSetting
   const route = "pathM" in input.route ? input.route : prepareRoute(validateRouteProfile(input.route), input.descents);
   const options = input.options ?? {};
   const asPlanned = input.asPlanned ?? runPrepared(route, input.rig, options);
-  const first = withBands(route, input.descents, input.rig, options, adviseRig({ ...input, route, asPlanned }), asPlanned, band);
   const ambientC = asPlanned.model.params.ambientC;
-  const spreads: Record<number, number> = {};
-  for (const note of first.advice.uncertainty) {
-    if (note.line !== "hot") continue;
-    const k = note.hits.map((h) => (h.highC - h.peakC) / Math.max(1, h.peakC - ambientC));
-    spreads[note.descentIndex] = SECOND_PASS_SLACK * Math.max(...k);
-  }
-  if (Object.keys(spreads).length === 0) return first;
-  const settings = { ...input.settings, bandSpreads: spreads };
-  const again = adviseRig({ ...input, route, asPlanned, settings });
-  const second = withBands(route, input.descents, input.rig, options, again, asPlanned, band);
-  const fades = (b: BandedAdvice) => b.advice.uncertainty.filter((n) => n.line === "hot").length;
+  const pass = (spreads: Record<number, number>) => {
+    const settings = { ...input.settings, bandSpreads: spreads };
+    return withBands(route, input.descents, input.rig, options, adviseRig({ ...input, route, asPlanned, settings }), asPlanned, band);
+  };
+  const fades = (b: BandedAdvice) => b.advice.uncertainty.filter((n) => n.line === "hot");
   const gaveUp = (b: BandedAdvice) => new Set(b.advice.descents.filter((d) => d.nothingIsEnough).map((d) => d.descentIndex));
+  const first = pass({ ...input.settings?.bandSpreads });
   const firstGaveUp = gaveUp(first);
-  const newlyGivenUp = [...gaveUp(second)].some((i) => !firstGaveUp.has(i));
-  return !newlyGivenUp && fades(second) < fades(first) ? second : first;
+  let best = first;
+  let latest = first;
+  const spreads: Record<number, number> = { ...input.settings?.bandSpreads };
+  for (let n = 1; n < MAX_PASSES && fades(latest).length > 0; n++) {
+    for (const note of fades(latest)) {
+      const seen = Math.max(...note.hits.map((h) => (h.highC - h.peakC) / Math.max(1, h.peakC - ambientC)));
+      const asked = spreads[note.descentIndex] ?? 0;
+      spreads[note.descentIndex] = Math.max(PASS_SLACK * seen, 1.5 * asked);
+    }
+    latest = pass({ ...spreads });
+    const newlyGivenUp = [...gaveUp(latest)].some((i) => !firstGaveUp.has(i));
+    if (!newlyGivenUp && fades(latest).length < fades(best).length) best = latest;
+  }
+  return best;
 }

@@ -102,7 +102,10 @@ export function bandNoteText(note: BandNote, system: UnitSystem, noun: string): 
   const hits = note.hits
     .map((h) => `${h.position === "trailer" ? noun : h.position} up to about ${formatTemperatureBand(h.highC, null, Infinity, system)} (its line is ${formatTemperature(h.limitC, system)})`)
     .join(", ");
-  return `Could reach ${what} on descent ${note.descentIndex + 1} within the model's uncertainty: ${hits}.`;
+  const sentence = `Could reach ${what} on descent ${note.descentIndex + 1} within the model's uncertainty: ${hits}.`;
+  if (note.line !== "hot") return sentence;
+  const remedies = (["less-load", "brake-upgrade", "another-route"] as const).map((r) => remedyText(r, { trailerNoun: noun, gain: null }));
+  return `${sentence} What would change it: ${remedies.slice(0, -1).join(", ")} or ${remedies.at(-1)}.`;
 }
 
 /** @private The combined plan as one sentence, with its result; when it is not enough, why and what would change it. */
