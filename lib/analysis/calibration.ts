@@ -7,6 +7,9 @@
 import type { StoredCalibration } from "@/lib/validation/calibration";
 import { calibrate, prepareRoute, validateRouteProfile, type BrakeReading, type CalibratedParameter, type HeatRunOptions, type Rig } from "@/lib/thermal";
 import type { RouteProfile } from "@/lib/route";
+import type { CalibrationUse } from "./calibration-note";
+
+export { calibrationNote, type CalibrationUse } from "./calibration-note";
 
 /** A calibration the heat worker runs: the route's stored profile, the rig, the readings and the run's options. */
 export interface CalibrationJob {
@@ -63,15 +66,6 @@ export function withCalibration(options: HeatRunOptions, calibration: StoredCali
   return { ...options, params: { ...fitted, ...options.params } };
 }
 
-/** What a heat run reports about the calibration it used. */
-export interface CalibrationUse {
-  fittedAt: string;
-  readings: number;
-  usedReadings: number;
-  /** The factors the run used (a factor overridden by the run's own options is not listed). */
-  applied: Partial<Record<CalibratedParameter, number>>;
-}
-
 /**
  * Which fitted factors a run with these options takes from the calibration (an option set before
  * {@link withCalibration} overrides it), or null when it takes none.
@@ -85,16 +79,3 @@ export function calibrationUse(options: HeatRunOptions, calibration: StoredCalib
   return { fittedAt: calibration.fittedAt, readings: calibration.readings.length, usedReadings: calibration.results.length, applied };
 }
 
-const FACTOR_NAMES: Record<CalibratedParameter, string> = { coolingFactor: "cooling factor", engineBrakingScale: "engine-braking scale" };
-
-/**
- * The note a heat run carries when its factors came from a calibration.
- * @example calibrationNote(use) // "Cooling factor 0.82 and engine-braking scale 1.31 from the rig's calibration of 2026-12-04 (2 readings)."
- */
-export function calibrationNote(use: CalibrationUse): string {
-  const parts = (Object.entries(use.applied) as [CalibratedParameter, number][]).map(([k, v]) => `${FACTOR_NAMES[k]} ${v.toFixed(2)}`);
-  const text = parts.join(" and ");
-  const left = use.readings - use.usedReadings;
-  const count = `${use.readings} reading${use.readings === 1 ? "" : "s"}${left > 0 ? `, ${left} left out of the fit` : ""}`;
-  return `${text.charAt(0).toUpperCase()}${text.slice(1)} from the rig's calibration of ${use.fittedAt.slice(0, 10)} (${count}).`;
-}

@@ -79,7 +79,7 @@ export function inputsHash(
     rig,
     options,
     region,
-    ...(calibration ? { calibration: { fittedAt: calibration.fittedAt, fitted: calibration.fitted, fittedParameters: calibration.fittedParameters, readings: calibration.readings.length, used: calibration.results.length } } : {}),
+    ...(calibration ? { calibration: { fittedAt: calibration.fittedAt, coolingFactor: calibration.fitted.coolingFactor, engineBrakingScale: calibration.fitted.engineBrakingScale, fittedParameters: calibration.fittedParameters, readings: calibration.readings.length, used: calibration.results.length } } : {}),
   };
   return createHash("sha256").update(JSON.stringify(inputs)).digest("hex");
 }
