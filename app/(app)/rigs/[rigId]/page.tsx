@@ -71,7 +71,7 @@ export default async function RigPage({ params }: { params: Promise<{ rigId: str
             canEdit={can(saved.role, "content.update")}
             unitSystem={units}
             routes={routes.map((r) => ({ id: r.id, name: r.name, lengthM: r.lengthM }))}
-            positions={resolveModel(saved.rig).positions.map((p) => p.position)}
+            positions={resolveModel(saved.rig).positions.map((p) => ({ position: p.position, validityCeilingC: p.validityCeilingC }))}
             initial={saved.calibration}
           />
         </div>

@@ -18,6 +18,7 @@ import type { AnalysisResult } from "@/lib/analysis/analyze";
 import { calibrationNote, type CalibrationUse } from "@/lib/analysis/calibration-note";
 import { api, ApiError } from "@/lib/client/api";
 import {
+  BEYOND_RANGE_TEXT,
   distanceUnit,
   formatDistance,
   formatTemperature,
@@ -59,16 +60,17 @@ export function CalibrationSection({
   canEdit: boolean;
   unitSystem: UnitSystem;
   routes: RouteChoice[];
-  positions: ReadingPosition[];
+  positions: { position: ReadingPosition; validityCeilingC: number }[];
   initial: StoredCalibration | null;
 }) {
   const [calibration, setCalibration] = useState<StoredCalibration | null>(initial);
+  const ceilings = Object.fromEntries(positions.map((p) => [p.position, p.validityCeilingC])) as Partial<Record<ReadingPosition, number>>;
   const routeName = (id: string) => routes.find((r) => r.id === id)?.name ?? "a route no longer kept";
   return (
     <div className="space-y-6">
       {calibration ? (
         <>
-          <CalibrationView calibration={calibration} unitSystem={unitSystem} routeName={routeName(calibration.routeId)} />
+          <CalibrationView calibration={calibration} unitSystem={unitSystem} routeName={routeName(calibration.routeId)} ceilings={ceilings} />
           {canEdit && <ClearCalibration rigId={rigId} onCleared={() => setCalibration(null)} />}
           <Reforecast rigId={rigId} calibration={calibration} unitSystem={unitSystem} routeName={routeName(calibration.routeId)} />
         </>
@@ -80,7 +82,15 @@ export function CalibrationSection({
       )}
       {canEdit && routes.length === 0 && <p className="text-sm text-ink-muted">Upload the route the readings were taken on first, on Routes.</p>}
       {canEdit && routes.length > 0 && (
-        <ReadingsForm rigId={rigId} unitSystem={unitSystem} routes={routes} positions={positions} again={calibration !== null} onStored={setCalibration} />
+        <ReadingsForm
+          rigId={rigId}
+          unitSystem={unitSystem}
+          routes={routes}
+          positions={positions.map((p) => p.position)}
+          firstRouteId={calibration && routes.some((r) => r.id === calibration.routeId) ? calibration.routeId : routes[0]!.id}
+          again={calibration !== null}
+          onStored={setCalibration}
+        />
       )}
     </div>
   );
@@ -91,6 +101,7 @@ function ReadingsForm({
   unitSystem,
   routes,
   positions,
+  firstRouteId,
   again,
   onStored,
 }: {
@@ -98,12 +109,13 @@ function ReadingsForm({
   unitSystem: UnitSystem;
   routes: RouteChoice[];
   positions: ReadingPosition[];
+  firstRouteId: string;
   again: boolean;
   onStored: (c: StoredCalibration) => void;
 }) {
   const router = useRouter();
   const formId = useId();
-  const [routeId, setRouteId] = useState(routes[0]!.id);
+  const [routeId, setRouteId] = useState(firstRouteId);
   const [rows, setRows] = useState<Row[]>(() => [emptyRow(positions[0]!)]);
   const [errors, setErrors] = useState<Errors>({});
   const [general, setGeneral] = useState<string | null>(null);
@@ -239,8 +251,20 @@ function RowField({ label, error, children }: { label: string; error?: string; c
   );
 }
 
-function CalibrationView({ calibration: c, unitSystem, routeName }: { calibration: StoredCalibration; unitSystem: UnitSystem; routeName: string }) {
+function CalibrationView({
+  calibration: c,
+  unitSystem,
+  routeName,
+  ceilings,
+}: {
+  calibration: StoredCalibration;
+  unitSystem: UnitSystem;
+  routeName: string;
+  ceilings: Partial<Record<ReadingPosition, number>>;
+}) {
   const t = (x: number) => formatTemperature(x, unitSystem);
+  /** A modelled temperature; at or past the brake's validity ceiling no number is shown (docs/model.md). */
+  const model = (x: number, i: number) => (x >= (ceilings[c.readings[i]!.position] ?? Infinity) ? BEYOND_RANGE_TEXT : t(x));
   const where = (i: number) => {
     const r = c.readings[i]!;
     return `${POSITION_TEXT[r.position]} at ${formatDistance(r.atM, unitSystem)}, ${r.minutesAfterStop > 0 ? `${r.minutesAfterStop} min after stopping` : "at once"}`;
@@ -274,8 +298,8 @@ function CalibrationView({ calibration: c, unitSystem, routeName }: { calibratio
               <p className="font-medium">Reading {r.reading + 1}: {where(r.reading)}</p>
               <dl className="mt-1 grid grid-cols-2 gap-x-3 gap-y-0.5">
                 <dt className="text-ink-muted">Read</dt><dd>{t(c.readings[r.reading]!.tempC)}</dd>
-                <dt className="text-ink-muted">Model before</dt><dd>{t(r.modelBeforeC)}</dd>
-                <dt className="text-ink-muted">Model after</dt><dd>{t(r.modelAfterC)}</dd>
+                <dt className="text-ink-muted">Model before</dt><dd>{model(r.modelBeforeC, r.reading)}</dd>
+                <dt className="text-ink-muted">Model after</dt><dd>{model(r.modelAfterC, r.reading)}</dd>
                 <dt className="text-ink-muted">Reading − model</dt><dd>{formatTemperatureDifference(r.residualK, unitSystem)}</dd>
               </dl>
             </li>
