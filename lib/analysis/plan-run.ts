@@ -51,7 +51,8 @@ export interface PlanJob {
   profile: RouteProfile;
   descents: Descent[];
   waypoints: PlacedWaypoint[];
-  members: { rig: Rig; options: HeatRunOptions; region?: Region | null }[];
+  /** `notes` are added to the member's result notes (where its calibrated factors came from). */
+  members: { rig: Rig; options: HeatRunOptions; region?: Region | null; notes?: string[] }[];
 }
 
 /** Each member's result with the time it took, ms. */
@@ -68,6 +69,7 @@ export function runPlanJob(job: PlanJob): PlanJobResults {
   return job.members.map((m) => {
     const started = performance.now();
     const result = runPlanRig(route, job.profile, job.descents, job.waypoints, m.rig, m.options, m.region ?? null);
+    if (m.notes?.length) result.analysis.notes = [...result.analysis.notes, ...m.notes];
     return { result, computedMs: Math.round(performance.now() - started) };
   });
 }

@@ -20,6 +20,8 @@ export const AUDIT_ACTIONS = {
   "rig.created": "added a rig",
   "rig.updated": "changed a rig",
   "rig.deleted": "deleted a rig",
+  "rig.calibrated": "calibrated a rig from readings",
+  "rig.calibration_cleared": "cleared a rig's calibration",
   "plan.created": "created a plan",
   "plan.updated": "changed a plan",
   "plan.deleted": "deleted a plan",

@@ -86,3 +86,26 @@ export function toDistanceUnit(m: number, system: UnitSystem): number {
 export function toElevationUnit(m: number, system: UnitSystem): number {
   return system === "metric" ? m : m / M_PER_FT;
 }
+/** Converts a distance in the display unit (km or mi) to metres. */
+export function fromDistanceUnit(value: number, system: UnitSystem): number {
+  return system === "metric" ? value * 1000 : value * M_PER_MI;
+}
+/** Unit label of temperatures. */
+export function temperatureUnit(system: UnitSystem): "°C" | "°F" {
+  return system === "metric" ? "°C" : "°F";
+}
+/** Converts °C to the display unit of temperatures (°C or °F). */
+export function toTemperatureUnit(c: number, system: UnitSystem): number {
+  return system === "metric" ? c : (c * 9) / 5 + 32;
+}
+/** Converts a temperature in the display unit (°C or °F) to °C. */
+export function fromTemperatureUnit(value: number, system: UnitSystem): number {
+  return system === "metric" ? value : ((value - 32) * 5) / 9;
+}
+/** A temperature difference given in K: "+12 K" or, in imperial, "+22 °F" (a kelvin is 1.8 °F). */
+export function formatTemperatureDifference(k: number, system: UnitSystem): string {
+  const v = system === "metric" ? k : k * 1.8;
+  const r = Math.round(v);
+  const sign = r > 0 ? "+" : r < 0 ? "−" : "±";
+  return `${sign}${fmt(Math.abs(r), 0)} ${system === "metric" ? "K" : "°F"}`;
+}

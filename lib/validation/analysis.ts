@@ -24,6 +24,8 @@ export const analysisRequestSchema = z
     rig: rigSchema.optional(),
     options: heatRunOptionsSchema.optional(),
     detail: z.enum(["none", "sampled", "full"]).optional(),
+    /** A saved rig's calibration: applied (the default) or ignored, for the uncalibrated forecast beside it. */
+    calibration: z.enum(["apply", "ignore"], "calibration: apply or ignore.").optional(),
   })
   .refine((r) => (r.routeId === undefined) !== (r.gpx === undefined), { message: "Give either routeId or gpx.", path: ["routeId"] })
   .refine((r) => (r.rigId === undefined) !== (r.rig === undefined), { message: "Give either rigId or rig.", path: ["rigId"] });

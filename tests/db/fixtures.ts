@@ -28,12 +28,13 @@ export async function makeTeam(name: string, members: { userId: string; role: Ro
   return org!.id;
 }
 
-/** Row counts of the tables a denied request must not touch. */
+/** Row counts of the tables a denied request must not touch, and every rig's calibration (as a digest). */
 export async function snapshotCounts() {
-  const [row] = await getDb().execute<{ m: number; i: number; a: number; o: number; u: number }>(sql`
+  const [row] = await getDb().execute<{ m: number; i: number; a: number; o: number; u: number; c: string }>(sql`
     select (select count(*)::int from memberships) as m, (select count(*)::int from invitations) as i,
            (select count(*)::int from audit_events) as a, (select count(*)::int from organisations) as o,
-           (select count(*)::int from users) as u`).then((r) => r.rows);
+           (select count(*)::int from users) as u,
+           (select coalesce(string_agg(id::text || ':' || md5(coalesce(calibration::text, '')), ',' order by id), '') from rigs) as c`).then((r) => r.rows);
   const names = await getDb().select({ id: organisations.id, name: organisations.name }).from(organisations);
   const roles = await getDb().select().from(memberships);
   return { ...row!, names: names.sort((a, b) => a.id.localeCompare(b.id)), roles: roles.map((r) => `${r.organisationId}/${r.userId}/${r.role}`).sort() };

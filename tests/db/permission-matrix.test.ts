@@ -4,6 +4,7 @@
  * foundation issue: owners run the organisation, planners write content, viewers read), not derived from
  * the policy table, so a change to either shows up here. A denied cell must leave the database unchanged.
  */
+import { readFileSync } from "node:fs";
 import { beforeAll, describe, expect, it } from "vitest";
 import { getDb } from "../../db";
 import type { Role } from "../../lib/auth/permissions";
@@ -13,10 +14,18 @@ import { listAuditEventsByOrganisation } from "../../lib/server/audit";
 import { createInvitation, listInvitations, revokeInvitation } from "../../lib/server/invitations";
 import { changeMemberRole, listMembers, removeMember } from "../../lib/server/members";
 import { renameOrganisation } from "../../lib/server/organisations";
+import { runCalibrationJob } from "../../lib/analysis/calibration";
+import { calibrateRig, clearRigCalibration } from "../../lib/server/rigs/calibration-dal";
+import { createRig } from "../../lib/server/rigs/rigs-dal";
+import { uploadRoute } from "../../lib/server/routes/upload-route";
+import { UTE_AND_CARAVAN } from "../../lib/thermal";
 import { makeTeam, makeUser, snapshotCounts } from "./fixtures";
 
 type Outcome = "allow" | "forbidden" | "not_found";
-type Org = { id: string; owner: string; planner: string; viewer: string };
+type Org = { id: string; owner: string; planner: string; viewer: string; rigId: string; routeId: string };
+
+/** The fit in-process (the same job the heat worker runs), so the matrix stays quick. */
+const inProcess = (job: Parameters<typeof runCalibrationJob>[0]) => Promise.resolve(runCalibrationJob(job));
 
 const ACTIONS: Record<string, (actor: string, org: Org) => Promise<unknown>> = {
   "read members": (actor, org) => listMembers(getDb(), { userId: actor }, org.id),
@@ -33,6 +42,9 @@ const ACTIONS: Record<string, (actor: string, org: Org) => Promise<unknown>> = {
   },
   "change role": async (actor, org) => changeMemberRole(getDb(), { userId: actor }, org.id, await freshMember(org), "planner"),
   "remove member": async (actor, org) => removeMember(getDb(), { userId: actor }, org.id, await freshMember(org)),
+  "calibrate rig": (actor, org) =>
+    calibrateRig(getDb(), { userId: actor }, org.rigId, { routeId: org.routeId, readings: [{ position: "front", atM: 3000, tempC: 150 }] }, inProcess),
+  "clear rig calibration": (actor, org) => clearRigCalibration(getDb(), { userId: actor }, org.rigId),
   "read audit list": async (actor, org) => {
     await requireAccess(getDb(), { userId: actor }, org.id, "audit.read");
     return listAuditEventsByOrganisation(getDb(), { organisationId: org.id });
@@ -51,6 +63,8 @@ const OWN: Record<string, Record<Role, Outcome>> = {
   "withdraw invitation": { owner: "allow", planner: "forbidden", viewer: "forbidden" },
   "change role": { owner: "allow", planner: "forbidden", viewer: "forbidden" },
   "remove member": { owner: "allow", planner: "forbidden", viewer: "forbidden" },
+  "calibrate rig": { owner: "allow", planner: "allow", viewer: "forbidden" },
+  "clear rig calibration": { owner: "allow", planner: "allow", viewer: "forbidden" },
   "read audit list": { owner: "allow", planner: "forbidden", viewer: "forbidden" },
 };
 
@@ -64,7 +78,10 @@ async function makeOrg(label: string): Promise<Org> {
     { userId: planner.userId, role: "planner" },
     { userId: viewer.userId, role: "viewer" },
   ]);
-  return { id, owner: owner.userId, planner: planner.userId, viewer: viewer.userId };
+  const bytes = new Uint8Array(readFileSync("tests/fixtures/gpx/tarnwick-saddle-1-0.gpx"));
+  const { route } = await uploadRoute(getDb(), { userId: planner.userId }, id, { bytes, fileName: "tarnwick.gpx" });
+  const rigId = await createRig(getDb(), { userId: planner.userId }, id, { name: `${label} rig`, region: "AU", rig: structuredClone(UTE_AND_CARAVAN) as never });
+  return { id, owner: owner.userId, planner: planner.userId, viewer: viewer.userId, rigId, routeId: route.id };
 }
 
 /** A member created for one cell, so that removing or re-roling them never disturbs another cell. */

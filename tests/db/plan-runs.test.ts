@@ -134,8 +134,8 @@ describe("inputsHash", () => {
     const { runs } = await planRuns(db(), planner, id);
     const [first, second] = [await getRig(db(), planner, rigA), await getRig(db(), viewer, rigA)];
     const k = await routeKey();
-    expect(inputsHash(k, first.rig as Rig, runs[0]!.options)).toBe(inputsHash(k, second.rig as Rig, runs[0]!.options));
-    expect(runs[0]!.inputsHash).toBe(inputsHash(k, first.rig as Rig, runs[0]!.options));
+    expect(inputsHash(k, first.rig as Rig, runs[0]!.options, first.region)).toBe(inputsHash(k, second.rig as Rig, runs[0]!.options, second.region));
+    expect(runs[0]!.inputsHash).toBe(inputsHash(k, first.rig as Rig, runs[0]!.options, first.region, first.calibration));
     expect((await planRuns(db(), viewer, id)).runs[0]!.inputsHash).toBe(runs[0]!.inputsHash);
   });
 });

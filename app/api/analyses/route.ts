@@ -6,8 +6,9 @@ import { analysisRequestSchema } from "@/lib/validation/analysis";
 import type { HeatRunOptions } from "@/lib/thermal";
 
 /**
- * POST /api/analyses { routeId | gpx, rigId | rig, options?, detail? }: the heat run of a rig over a route with
- * a summary per descent (signed in; saved routes and rigs must be readable by you). The model runs in a worker.
+ * POST /api/analyses { routeId | gpx, rigId | rig, options?, detail?, calibration? }: the heat run of a rig over a
+ * route with a summary per descent (signed in; saved routes and rigs must be readable by you). The model runs in
+ * a worker. A saved rig's calibration is applied unless `calibration` is "ignore".
  */
 export const POST = route(async (request) => {
   const user = await requireSessionUser();
@@ -17,6 +18,7 @@ export const POST = route(async (request) => {
     rig: body.rigId ? { rigId: body.rigId } : { rig: body.rig! },
     options: body.options as HeatRunOptions | undefined,
     detail: body.detail,
+    calibration: body.calibration,
   });
   return Response.json({ analysis: result });
 });

@@ -1,10 +1,12 @@
 /**
- * Worker-thread entry: brake-heat runs off the request thread. Two jobs: heat runs of one or more rigs over one
- * route (analyses), and a plan's rigs with their advice (plans). Compiled to build/workers/heat-worker.mjs by
+ * Worker-thread entry: brake-heat runs off the request thread. Three jobs: heat runs of one or more rigs over one
+ * route (analyses), a plan's rigs with their advice (plans), and the fit of a rig to infrared readings
+ * (calibrations, docs/model.md §11). Compiled to build/workers/heat-worker.mjs by
  * scripts/build-workers.mjs.
  */
 import { parentPort, workerData } from "node:worker_threads";
 import { analyzeRoute, type TraceDetail } from "@/lib/analysis/analyze";
+import { runCalibrationJob, type CalibrationJob } from "@/lib/analysis/calibration";
 import { runPlanJob, type PlanJob } from "@/lib/analysis/plan-run";
 import type { Descent, RouteProfile } from "@/lib/route";
 import type { HeatRunOptions, Rig } from "@/lib/thermal";
@@ -18,10 +20,12 @@ interface AnalysisJob {
   detail: TraceDetail;
 }
 
-const job = workerData as AnalysisJob | PlanJob;
+const job = workerData as AnalysisJob | PlanJob | CalibrationJob;
 try {
   if (job.kind === "plan") {
     parentPort?.postMessage({ ok: true, results: runPlanJob(job) });
+  } else if (job.kind === "calibration") {
+    parentPort?.postMessage({ ok: true, result: runCalibrationJob(job) });
   } else {
     parentPort?.postMessage({ ok: true, results: job.rigs.map((rig) => analyzeRoute(job.profile, job.descents, rig, job.options, job.detail)) });
   }

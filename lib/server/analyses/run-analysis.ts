@@ -1,9 +1,11 @@
 import "server-only";
 import type { DbOrTx } from "@/db";
 import type { AnalysisResult, TraceDetail } from "@/lib/analysis/analyze";
+import { calibrationNote, calibrationUse, withCalibration, type CalibrationUse } from "@/lib/analysis/calibration";
 import { AppError } from "@/lib/errors";
 import type { Descent, RouteProfile } from "@/lib/route";
 import type { HeatRunOptions, Rig } from "@/lib/thermal";
+import type { StoredCalibration } from "@/lib/validation/calibration";
 import type { Actor } from "../access";
 import { getRig } from "../rigs/rigs-dal";
 import { decodeUpload } from "../routes/decode-upload";
@@ -31,26 +33,31 @@ async function resolveRoute(db: DbOrTx, actor: Actor, source: RouteSource): Prom
   return { profile: processed.profile, descents: processed.descents, name: processed.name ?? "Uploaded route" };
 }
 
-async function resolveRig(db: DbOrTx, actor: Actor, source: RigSource): Promise<{ rig: Rig; name: string | null }> {
+async function resolveRig(db: DbOrTx, actor: Actor, source: RigSource): Promise<{ rig: Rig; name: string | null; calibration: StoredCalibration | null }> {
   if ("rigId" in source) {
     const saved = await getRig(db, actor, source.rigId);
-    return { rig: saved.rig, name: saved.name };
+    return { rig: saved.rig, name: saved.name, calibration: saved.calibration };
   }
-  return { rig: source.rig, name: null };
+  return { rig: source.rig, name: null, calibration: null };
 }
 
 /**
  * One analysis: the heat run of a rig over a route with a summary per descent, computed in a worker thread
  * so the request thread never waits on the model. Access to saved routes and rigs is checked as for reading them.
+ * A saved rig with a calibration runs with its fitted factors (docs/model.md §11) unless `calibration` is
+ * "ignore" or the options set those parameters themselves; the result then says so in `calibration` and its notes.
  */
 export async function runAnalysis(
   db: DbOrTx,
   actor: Actor,
-  input: { route: RouteSource; rig: RigSource; options?: HeatRunOptions; detail?: TraceDetail },
-): Promise<AnalysisResult & { routeName: string; rigName: string | null }> {
+  input: { route: RouteSource; rig: RigSource; options?: HeatRunOptions; detail?: TraceDetail; calibration?: "apply" | "ignore" },
+): Promise<AnalysisResult & { routeName: string; rigName: string | null; calibration: CalibrationUse | null }> {
   const [route, rig] = await Promise.all([resolveRoute(db, actor, input.route), resolveRig(db, actor, input.rig)]);
-  const [result] = await analyzeInWorker(route.profile, route.descents, [rig.rig], input.options ?? {}, input.detail ?? "sampled");
-  return { ...result!, routeName: route.name, rigName: rig.name };
+  const stored = input.calibration === "ignore" ? null : rig.calibration;
+  const own = input.options ?? {};
+  const use = calibrationUse(own, stored);
+  const [result] = await analyzeInWorker(route.profile, route.descents, [rig.rig], withCalibration(own, stored), input.detail ?? "sampled");
+  return { ...result!, notes: use ? [...result!.notes, calibrationNote(use)] : result!.notes, routeName: route.name, rigName: rig.name, calibration: use };
 }
 
 /** Heat runs of several rigs over one route in one worker (a convoy). */

@@ -4,12 +4,14 @@ import { and, eq, inArray, notInArray } from "drizzle-orm";
 import type { DbOrTx } from "@/db";
 import { heatRuns, planRigs, routes } from "@/db/schema";
 import { DEFAULT_ADVICE_SETTINGS } from "@/lib/advice";
+import { calibrationNote, calibrationUse, withCalibration, type CalibrationUse } from "@/lib/analysis/calibration";
 import { conditionsToOptions, type PlanConditions } from "@/lib/analysis/conditions";
 import type { Region } from "@/lib/compliance";
 import { findDescents } from "@/lib/route";
 import type { PlanJob, PlanJobResults, PlanRigResult } from "@/lib/analysis/plan-run";
 import { AppError } from "@/lib/errors";
 import { MODEL_VERSION, type HeatRunOptions, type Rig } from "@/lib/thermal";
+import { readStoredCalibration, type StoredCalibration } from "@/lib/validation/calibration";
 import type { Actor } from "../access";
 import { getRoute, getRouteProfile } from "../routes/routes-dal";
 import { runWorker } from "../workers";
@@ -40,7 +42,10 @@ export interface PlanRigRun {
   rig: Rig;
   /** The rig's region, for its trailer-brake rule. */
   region: Region;
+  /** The plan's conditions as model options, with the rig's calibrated factors (docs/model.md §11). */
   options: HeatRunOptions;
+  /** The rig's calibration and which of its factors the run takes, or null. */
+  calibration: CalibrationUse | null;
   inputsHash: string;
   /** The stored result for these inputs, or null (never computed, or an input changed since). */
   result: PlanRigResult | null;
@@ -55,16 +60,27 @@ export function planConditions(plan: Pick<PlanConditions, keyof PlanConditions>)
 /**
  * Hash of every input of one rig's heat run and advice: the route (its row is immutable apart from its name, so
  * id, file hash, track and step identify its profile and waypoints), the rig as stored, the conditions as model
- * options, the model version and the advice engine's settings. Any change gives a new hash, so an old result
- * is never taken for the current one.
+ * options (with the calibrated factors), the model version, the advice engine's settings, and the calibration
+ * the run used (when it fits the factors are in the options; its date and readings are in the result's notes,
+ * so a new calibration with the same factors still gives a new hash). Any change gives a new hash, so an old
+ * result is never taken for the current one. Without a calibration the hash is what it was before calibrations.
  */
 export function inputsHash(
   route: { id: string; contentSha256: string; trackId: string; stepM: number },
   rig: Rig,
   options: HeatRunOptions,
   region: Region | null = null,
+  calibration: StoredCalibration | null = null,
 ): string {
-  const inputs = { model: MODEL_VERSION, advice: DEFAULT_ADVICE_SETTINGS, route, rig, options, region };
+  const inputs = {
+    model: MODEL_VERSION,
+    advice: DEFAULT_ADVICE_SETTINGS,
+    route,
+    rig,
+    options,
+    region,
+    ...(calibration ? { calibration: { fittedAt: calibration.fittedAt, coolingFactor: calibration.fitted.coolingFactor, engineBrakingScale: calibration.fitted.engineBrakingScale, fittedParameters: calibration.fittedParameters, readings: calibration.readings.length, used: calibration.results.length } } : {}),
+  };
   return createHash("sha256").update(JSON.stringify(inputs)).digest("hex");
 }
 
@@ -77,17 +93,23 @@ async function routeKey(db: DbOrTx, routeId: string) {
 export async function planRuns(db: DbOrTx, actor: Actor, planId: string) {
   const plan = await getPlan(db, actor, planId);
   const key = await routeKey(db, plan.routeId);
-  const options = conditionsToOptions(planConditions(plan));
-  const members = plan.convoy.map((c) => ({
-    planRigId: c.planRigId,
-    rigId: c.rigId,
-    label: c.label,
-    rigName: c.rigName,
-    rig: c.rig as Rig,
-    region: c.region as Region,
-    options,
-    inputsHash: inputsHash(key, c.rig as Rig, options, c.region as Region),
-  }));
+  const conditions = conditionsToOptions(planConditions(plan));
+  const members = plan.convoy.map((c) => {
+    // A calibrated rig runs with its fitted factors; a what-if on the plan page changes them on top.
+    const calibration = readStoredCalibration(c.calibration);
+    const options = withCalibration(conditions, calibration);
+    return {
+      planRigId: c.planRigId,
+      rigId: c.rigId,
+      label: c.label,
+      rigName: c.rigName,
+      rig: c.rig as Rig,
+      region: c.region as Region,
+      options,
+      calibration: calibrationUse(conditions, calibration),
+      inputsHash: inputsHash(key, c.rig as Rig, options, c.region as Region, calibration),
+    };
+  });
   const stored = members.length
     ? await db
         .select({ planRigId: heatRuns.planRigId, inputsHash: heatRuns.inputsHash, result: heatRuns.result, createdAt: heatRuns.createdAt, computedMs: heatRuns.computedMs })
@@ -119,7 +141,7 @@ export async function computePlanRuns(db: DbOrTx, actor: Actor, planId: string, 
   // Descents are found again on the stored profile, so every route gets the current model's descent rules.
   const descents = findDescents(profile);
   const waypoints = route.waypoints.filter((w) => w.distanceM !== null);
-  const members = todo.map((r) => ({ rig: r.rig, options: r.options, region: r.region }));
+  const members = todo.map((r) => ({ rig: r.rig, options: r.options, region: r.region, notes: r.calibration ? [calibrationNote(r.calibration)] : [] }));
   const job: PlanJob = { kind: "plan", profile, descents, waypoints, members };
   const results = await (execute ?? runInWorker)(job);
   const now = new Date();

@@ -58,7 +58,7 @@ export async function getPlan(db: DbOrTx, actor: Actor, planId: string) {
   const { role } = await guard(db, actor, planId, "content.read");
   const [plan] = await db.select(planColumns).from(plans).where(eq(plans.id, planId));
   const convoy = await db
-    .select({ planRigId: planRigs.id, rigId: planRigs.rigId, label: planRigs.label, position: planRigs.position, rigName: rigs.name, region: rigs.region, rig: rigs.rig, rigUpdatedAt: rigs.updatedAt })
+    .select({ planRigId: planRigs.id, rigId: planRigs.rigId, label: planRigs.label, position: planRigs.position, rigName: rigs.name, region: rigs.region, rig: rigs.rig, calibration: rigs.calibration, rigUpdatedAt: rigs.updatedAt })
     .from(planRigs)
     .innerJoin(rigs, eq(rigs.id, planRigs.rigId))
     .where(eq(planRigs.planId, planId))

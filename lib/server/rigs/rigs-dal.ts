@@ -5,6 +5,7 @@ import { rigs, users } from "@/db/schema";
 import { checkRigCompliance, type Region } from "@/lib/compliance";
 import type { Rig } from "@/lib/thermal";
 import { AppError, notFound } from "@/lib/errors";
+import { readStoredCalibration } from "@/lib/validation/calibration";
 import type { SavedRigInput } from "@/lib/validation/rig";
 import { isUuid, requireAccess, type Actor } from "../access";
 import { recordAudit } from "../audit";
@@ -15,6 +16,7 @@ const columns = {
   name: rigs.name,
   region: rigs.region,
   rig: rigs.rig,
+  calibration: rigs.calibration,
   createdAt: rigs.createdAt,
   updatedAt: rigs.updatedAt,
   createdByName: users.name,
@@ -30,12 +32,13 @@ export async function listRigs(db: DbOrTx, actor: Actor, organisationId: string)
   return rows.map(withCompliance);
 }
 
-function withCompliance<T extends { rig: Rig; region: Region }>(row: T) {
-  return { ...row, compliance: checkRigCompliance(row.rig, row.region) };
+/** A row as answered: its compliance report, and its calibration checked against the schema on the way out. */
+function withCompliance<T extends { rig: Rig; region: Region; calibration: unknown }>(row: T) {
+  return { ...row, calibration: readStoredCalibration(row.calibration), compliance: checkRigCompliance(row.rig, row.region) };
 }
 
 /** A rig's organisation, read first so that another organisation's rig answers 404 like a missing one. */
-async function guard(db: DbOrTx, actor: Actor, rigId: string, action: "content.read" | "content.update" | "content.delete") {
+export async function guardRig(db: DbOrTx, actor: Actor, rigId: string, action: "content.read" | "content.update" | "content.delete") {
   if (!isUuid(rigId)) throw notFound("That rig");
   const [row] = await db.select({ organisationId: rigs.organisationId }).from(rigs).where(eq(rigs.id, rigId));
   if (!row) throw notFound("That rig");
@@ -48,7 +51,7 @@ async function guard(db: DbOrTx, actor: Actor, rigId: string, action: "content.r
 }
 
 export async function getRig(db: DbOrTx, actor: Actor, rigId: string) {
-  const { organisationId, role } = await guard(db, actor, rigId, "content.read");
+  const { organisationId, role } = await guardRig(db, actor, rigId, "content.read");
   const [row] = await db.select(columns).from(rigs).leftJoin(users, eq(users.id, rigs.createdByUserId)).where(eq(rigs.id, rigId));
   return { ...withCompliance(row!), organisationId, role };
 }
@@ -67,7 +70,7 @@ export async function createRig(db: DbOrTx, actor: Actor, organisationId: string
 }
 
 export async function updateRig(db: DbOrTx, actor: Actor, rigId: string, input: SavedRigInput) {
-  const { organisationId } = await guard(db, actor, rigId, "content.update");
+  const { organisationId } = await guardRig(db, actor, rigId, "content.update");
   await db.transaction(async (tx) => {
     await tx.update(rigs).set({ name: input.name, region: input.region, rig: input.rig, updatedAt: sql`now()` }).where(eq(rigs.id, rigId));
     await recordAudit(tx, { organisationId, actorUserId: actor.userId, action: "rig.updated", targetType: "rig", targetId: rigId, detail: { name: input.name } });
@@ -75,7 +78,7 @@ export async function updateRig(db: DbOrTx, actor: Actor, rigId: string, input: 
 }
 
 export async function deleteRig(db: DbOrTx, actor: Actor, rigId: string) {
-  const { organisationId } = await guard(db, actor, rigId, "content.delete");
+  const { organisationId } = await guardRig(db, actor, rigId, "content.delete");
   const usedBy = await plansUsing(db, { rigId });
   if (usedBy.length) throw new AppError("conflict", `This rig is in ${usedBy.length === 1 ? "the plan" : "the plans"} ${usedBy.map((n) => `“${n}”`).join(", ")}. Take it out of ${usedBy.length === 1 ? "that plan" : "those plans"} first.`);
   await db.transaction(async (tx) => {

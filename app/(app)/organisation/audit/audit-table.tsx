@@ -22,6 +22,8 @@ const ACTION_TEXT: Record<string, string> = {
   "rig.created": "Added a rig",
   "rig.updated": "Changed a rig",
   "rig.deleted": "Deleted a rig",
+  "rig.calibrated": "Calibrated a rig from readings",
+  "rig.calibration_cleared": "Cleared a rig's calibration",
   "plan.created": "Created a plan",
   "plan.updated": "Changed a plan",
   "plan.deleted": "Deleted a plan",

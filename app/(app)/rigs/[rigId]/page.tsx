@@ -7,9 +7,10 @@ import { buttonClasses } from "@/components/ui/button";
 import { Card, CardHeader, PageHeader } from "@/components/ui/card";
 import { can } from "@/lib/auth/permissions";
 import { listRoutes } from "@/lib/server/routes/routes-dal";
-import { rigMasses } from "@/lib/thermal";
+import { resolveModel, rigMasses } from "@/lib/thermal";
 import { formatMass } from "@/lib/units";
 import { ComplianceReportView } from "../_components/compliance-report";
+import { CalibrationSection } from "../_components/calibration-section";
 import { DeleteRigButton } from "../_components/delete-rig-button";
 import { TryOnRoute } from "../_components/try-on-route";
 import { loadRig } from "./load-rig";
@@ -57,6 +58,22 @@ export default async function RigPage({ params }: { params: Promise<{ rigId: str
         <CardHeader title="Try it on a route" description="A quick heat run of this rig over one of your routes, with the standard descent speeds. Plans add advice and convoys." />
         <div className="p-5">
           <TryOnRoute rigId={saved.id} routes={routes.map((r) => ({ id: r.id, name: r.name }))} unitSystem={units} />
+        </div>
+      </Card>
+      <Card className="mt-6">
+        <CardHeader
+          title="Calibrate from readings"
+          description="Brake temperatures you read with an infrared thermometer at a cool-down stop tune this rig's cooling and engine braking in the model. Plans and quick heat runs then use the fit."
+        />
+        <div className="p-5">
+          <CalibrationSection
+            rigId={saved.id}
+            canEdit={can(saved.role, "content.update")}
+            unitSystem={units}
+            routes={routes.map((r) => ({ id: r.id, name: r.name, lengthM: r.lengthM }))}
+            positions={resolveModel(saved.rig).positions.map((p) => ({ position: p.position, validityCeilingC: p.validityCeilingC }))}
+            initial={saved.calibration}
+          />
         </div>
       </Card>
       <SafetyCaution className="mt-6" />

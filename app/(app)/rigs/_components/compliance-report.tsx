@@ -34,7 +34,7 @@ export function ComplianceReportView({ report, units }: { report: ComplianceRepo
   const kg = (x: number | null) => (x === null ? "—" : formatMass(x, units));
   const brakes = report.trailerBrakes;
   return (
-    <div className="grid gap-6" data-testid="compliance-report">
+    <div className="grid grid-cols-[minmax(0,1fr)] gap-6" data-testid="compliance-report">
       <Card>
         <CardHeader title="Masses against ratings" description="Actual masses from your figures; a weighbridge reading in full touring trim is the only sure way." />
         <div className="overflow-x-auto p-5">

@@ -6,6 +6,7 @@ import { Button } from "@/components/ui/button";
 import { controlClasses } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
 import type { AnalysisResult } from "@/lib/analysis/analyze";
+import { calibrationNote, type CalibrationUse } from "@/lib/analysis/calibration-note";
 import { api } from "@/lib/client/api";
 import { formatDistance, formatTemperature, type UnitSystem } from "@/lib/units";
 
@@ -13,7 +14,7 @@ const CLASS_TEXT: Record<string, string> = { cool: "cool", warm: "warm (caution)
 
 export function TryOnRoute({ rigId, routes, unitSystem }: { rigId: string; routes: { id: string; name: string }[]; unitSystem: UnitSystem }) {
   const [routeId, setRouteId] = useState(routes[0]?.id ?? "");
-  const run = useMutation({ mutationFn: () => api<{ analysis: AnalysisResult }>("/api/analyses", { body: { rigId, routeId, detail: "none" } }).then((r) => r.analysis) });
+  const run = useMutation({ mutationFn: () => api<{ analysis: AnalysisResult & { calibration: CalibrationUse | null } }>("/api/analyses", { body: { rigId, routeId, detail: "none" } }).then((r) => r.analysis) });
   if (routes.length === 0) return <p className="text-sm text-ink-muted">Upload a route first, on Routes.</p>;
   const t = (c: number) => formatTemperature(c, unitSystem);
   return (
@@ -48,7 +49,9 @@ export function TryOnRoute({ rigId, routes, unitSystem }: { rigId: string; route
               </tbody>
             </table>
           </div>
-          <p className="text-xs text-ink-muted">Estimates from a physical model with typical values. Model {run.data.modelVersion}.</p>
+          <p className="text-xs text-ink-muted">
+            {run.data.calibration ? `Estimates from a physical model. ${calibrationNote(run.data.calibration)}` : "Estimates from a physical model with typical values."} Model {run.data.modelVersion}.
+          </p>
         </div>
       )}
     </div>
