@@ -4,7 +4,13 @@ import { segmentRanges } from "./segment-ranges";
 
 /** Options of {@link smoothElevation}. All in m. */
 export interface SmoothElevationOptions {
-  /** Width of the spike-removing median window, m. Default 50 (5 samples at a 10 m step). */
+  /**
+   * Width of the spike-removing median window, m. Default 80 (9 samples at a 10 m step, 5 at 20 m).
+   * [E] A median removes a spike up to half its window wide; a spike of one or two recorded points
+   * spreads over up to three point spacings once interpolated, so at a 20 m step a 50 m window (3
+   * samples) let two-sample spikes through and moved descent ends by up to 300 m. 80 m still keeps a
+   * sharp V valley within 3 m of its depth (tests/unit/route/profile.test.ts).
+   */
   medianWindowM?: number;
   /** Standard deviation of the Gaussian, m. Default 40 (at least one step is always used). */
   sigmaM?: number;
@@ -36,7 +42,7 @@ export function smoothElevation(
   gapAfter: Uint8Array,
   options: SmoothElevationOptions = {},
 ): Float64Array {
-  const medianWindowM = options.medianWindowM ?? 50;
+  const medianWindowM = options.medianWindowM ?? 80;
   const sigmaM = options.sigmaM ?? 40;
   if (!(medianWindowM >= 0) || !(sigmaM >= 0)) throw new RangeError("smoothing windows must be ≥ 0 m");
   if (distanceM.length !== elevationM.length || gapAfter.length !== elevationM.length) {

@@ -136,7 +136,7 @@ describe("--advice", () => {
     const out = run(GPX, ...RIG, "--advice").stdout;
     expect(out).toMatch(/Verdict: (clear|clear with advice|not advised)\./);
     expect(out).toMatch(/\nPlan: before the crest at \d+\.\d km/);
-    expect(out).toContain("Descent from 31.6 km");
+    expect(out).toContain("Descent from 31.8 km");
   }, 60_000);
 });
 

@@ -85,7 +85,27 @@ describe("findDescents: the documented rules", () => {
     const [d] = findDescents(rawProfile([5000], e));
     expect(d?.steepest200mGrade).toBeCloseTo(-0.12, 9);
     expect(d?.steepest1kmGrade).toBeCloseTo(-(0.12 * 300 + 0.06 * 700) / 1000, 9);
-    expect(d?.meanGrade).toBeCloseTo(-(0.12 * 300 + 0.06 * 2700) / 3000, 9);
+    // Rule 3 places the ends on the straight line through the 10 m bands below the top and above the
+    // bottom, whose grade is the body's mean (178 m over 2666.7 m, 6.675 %), not the 6 % at the ends: each
+    // end reads 16.9 m inside the corner. The drop stays exact.
+    const along = (3000 - 2 * (10 / 0.06)) / (198 - 20);
+    expect(d?.startDistanceM).toBeCloseTo(1000 + 10 / 0.06 - 10 * along, 9);
+    expect(d?.endDistanceM).toBeCloseTo(4000 - 10 / 0.06 + 10 * along, 9);
+    expect(d?.dropM).toBeCloseTo(198, 9);
+    expect(d?.meanGrade).toBeCloseTo(-198 / (3000 - 2 * (10 / 0.06 - 10 * along)), 9);
+  });
+
+  it("ends are interpolated between samples: a 500 m pitch at 20 % reads 20 % at 10 and 20 m steps", () => {
+    // The pitch starts 5 m past a sample at both steps; its ends and grade do not snap to the samples.
+    for (const stepM of [10, 20]) {
+      const [d] = findDescents(rawProfile([3000], legs(1000, [[1005, 0], [500, -0.2], FLAT]), stepM));
+      expect(d?.startDistanceM).toBeCloseTo(1005, 9);
+      expect(d?.endDistanceM).toBeCloseTo(1505, 9);
+      expect(d?.meanGrade).toBeCloseTo(-0.2, 9);
+      expect(d?.steepest1kmGrade).toBeCloseTo(-0.2, 9);
+      expect(d?.startIndex).toBe(Math.floor(1005 / stepM));
+      expect(d?.endIndex).toBe(Math.ceil(1505 / stepM));
+    }
   });
 
   it("the same rules hold on a smoothed GPS-style profile: one descent per real descent", () => {

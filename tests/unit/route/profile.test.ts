@@ -103,6 +103,20 @@ describe("grades and drops on synthetic constant-grade lines (plain geometry)", 
     expect(Math.min(...p.elevationM) - 760).toBeLessThan(3);
   });
 
+  it("a spike of two recorded points (±40 m, points 10 m apart) leaves under 1 m at 5, 10 and 20 m steps", () => {
+    // Interpolated, two raised points cover up to three point spacings (30 m): at a 20 m step that is two
+    // samples, which a three-sample median keeps. Several placements, so some straddle two samples.
+    for (const sign of [1, -1]) {
+      const pts = pathPoints(straightXY(402, 10), () => 500);
+      for (const at of [50, 101, 152, 203, 254, 305]) {
+        for (const k of [at, at + 1]) (pts[k] as { eleM: number }).eleM = 500 + sign * 40;
+      }
+      for (const stepM of [5, 10, 20]) {
+        for (const e of profileOf([pts], { stepM }).elevationM) expect(Math.abs(e - 500)).toBeLessThan(1);
+      }
+    }
+  });
+
   it("an isolated spike of one or two points (+40 m) is removed completely by the median", () => {
     for (const width of [1, 2]) {
       const pts = pathPoints(straightXY(201, 10), () => 500);
