@@ -30,11 +30,15 @@ export interface Descent {
 
 /** Rules of {@link findDescents}. Lengths and heights in m, grades dimensionless. */
 export interface FindDescentsOptions {
-  /** Least height lost, m. Default 60. */
+  /**
+   * Least height lost, m. Default 50. [E] A 5–6 t rig loses about 2.5 MJ on 50 m, enough to take a drum
+   * brake's bulk temperature up by some 100 K; a 1 km dip of about 60 m (a common short descent, and one the
+   * smoothing rounds to a little under 60 m) is then a descent with its own held speed and advice.
+   */
   minDropM?: number;
   /**
-   * Least length, m. Default 250. [E] With the 60 m least drop this binds only on pitches steeper than
-   * 24 % (60 m / 250 m), so any real road that loses 60 m counts however short it is (500 m at 20 %,
+   * Least length, m. Default 250. [E] With the 50 m least drop this binds only on pitches steeper than
+   * 20 % (50 m / 250 m), so any real road that loses 50 m counts however short it is (500 m at 20 %,
    * 400 m at 15 %; docs/model.md §4.2): for a heavy rig the height lost, not the length, is what heats the
    * brakes. What it still refuses is a "drop" shorter than the elevation smoothing's own footprint
    * (about ±2σ = 160 m at the default σ of 40 m, see smoothElevation), which on a recorded track is an
@@ -82,7 +86,7 @@ const EPS_M = 1e-9;
  *    with GPS noise, while a 10 m band lies above the residual elevation noise (about ±3 m) and its
  *    crossing moves by tens of metres. Interpolated ends keep the mean grade independent of where the
  *    samples fall (5, 10 or 20 m steps). See docs/model.md §4.2.
- * 4. It counts when it drops at least `minDropM` over at least `minLengthM` (defaults: 60 m over at least
+ * 4. It counts when it drops at least `minDropM` over at least `minLengthM` (defaults: 50 m over at least
  *    250 m), so a short steep pitch counts (500 m at 20 %) while a long gentle slope does not (1 km at
  *    3 % loses only 30 m).
  *
@@ -94,7 +98,7 @@ const EPS_M = 1e-9;
  */
 export function findDescents(profile: RouteProfile, options: FindDescentsOptions = {}): Descent[] {
   const rules: Rules = {
-    minDropM: options.minDropM ?? 60,
+    minDropM: options.minDropM ?? 50,
     minLengthM: options.minLengthM ?? 250,
     maxRiseM: options.maxRiseM ?? 10,
     maxInterruptionM: options.maxInterruptionM ?? 300,

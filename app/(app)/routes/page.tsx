@@ -15,7 +15,7 @@ export default async function RoutesPage() {
     <>
       <PageHeader
         title="Routes"
-        description={`The GPX tracks ${active.name} plans to drive. Fadeline cleans each track, smooths its elevation and finds every descent that loses at least 60 m.`}
+        description={`The GPX tracks ${active.name} plans to drive. Fadeline cleans each track, smooths its elevation and finds every descent that loses at least 50 m.`}
       />
       <RoutesView
         organisationId={active.id}

@@ -26,8 +26,9 @@ describe("findDescents: the documented rules", () => {
     ]);
   });
 
-  it("a 50 m drop over 1 km is not a descent", () => {
-    expect(findDescents(rawProfile([3000], legs(1000, [FLAT, [1000, -0.05], FLAT])))).toEqual([]);
+  it("a 45 m drop over 1 km is not a descent; 50 m is (the least drop is 50 m)", () => {
+    expect(findDescents(rawProfile([3000], legs(1000, [FLAT, [1000, -0.045], FLAT])))).toEqual([]);
+    expect(findDescents(rawProfile([3000], legs(1000, [FLAT, [1000, -0.05], FLAT])))).toHaveLength(1);
   });
 
   it("a short steep pitch is a descent: 500 m at 20 % (100 m) and 400 m at 15 % (60 m)", () => {

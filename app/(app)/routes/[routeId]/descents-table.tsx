@@ -49,7 +49,7 @@ export function DescentsTable({ descents, waypoints, unitSystem }: { descents: D
       columns={columns}
       data={rows}
       getRowId={(r) => String(r.number)}
-      empty={<EmptyState title="No descents on this route">No downhill section drops 60 m or more.</EmptyState>}
+      empty={<EmptyState title="No descents on this route">No downhill section drops 50 m or more.</EmptyState>}
     />
   );
 }

@@ -62,7 +62,7 @@ export default async function RoutePage({ params }: { params: Promise<{ routeId:
         <Card>
           <CardHeader
             title="Descents"
-            description="Downhill sections that lose at least 60 m over at least 250 m; rises of up to 10 m and flat stretches of up to 300 m do not end a descent."
+            description="Downhill sections that lose at least 50 m over at least 250 m; rises of up to 10 m and flat stretches of up to 300 m do not end a descent."
           />
           <div className="p-5">
             <DescentsTable descents={route.descents} waypoints={placed} unitSystem={units} />
