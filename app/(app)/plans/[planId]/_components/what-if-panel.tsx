@@ -32,7 +32,7 @@ const isAutomatic = (rig: Rig) => {
 };
 
 /** A number input that keeps what is typed and reports a value (or null when cleared) once it parses. */
-function NumberControl({ id, label, unit, value, placeholder, min, max, step, onValue }: { id: string; label: string; unit: string; value: number | null; placeholder: string; min: number; max: number; step?: number; onValue: (v: number | null) => void }) {
+function NumberControl({ id, label, unit, errorUnit = unit, value, placeholder, min, max, onValue }: { id: string; label: string; unit: string; errorUnit?: string; value: number | null; placeholder: string; min: number; max: number; onValue: (v: number | null) => void }) {
   const [text, setText] = useState(value === null ? "" : String(value));
   const [lastValue, setLastValue] = useState(value);
   if (value !== lastValue) {
@@ -60,7 +60,7 @@ function NumberControl({ id, label, unit, value, placeholder, min, max, step, on
           else if (Number.isFinite(v) && v >= min && v <= max) onValue(v);
         }}
       />
-      {bad && <p id={`${id}-error`} className="mt-1 text-xs text-danger-700">Between {min} and {max} {unit}.</p>}
+      {bad && <p id={`${id}-error`} className="mt-1 text-xs text-danger-700">Between {min} and {max}{errorUnit ? ` ${errorUnit}` : ""}.</p>}
     </div>
   );
 }
@@ -155,7 +155,7 @@ export function WhatIfPanel({
           <NumberControl id="wi-trailer-load" label={`Load in the ${trailerNoun(rig)}`} unit={massUnit} value={settings.trailerLoadKg === null ? null : massToUser(settings.trailerLoadKg, u)} placeholder={`now ${massToUser(rig.load.trailerLoadKg, u)}`} min={0} max={u === "metric" ? 5000 : 11000} onValue={(v) => set({ trailerLoadKg: v === null ? null : massFromUser(v, u) })} />
         )}
         <NumberControl id="wi-cooling" label="Brake cooling" unit="× the model's" value={settings.coolingFactor ?? null} placeholder={`now ${resolved.coolingFactor}`} min={WHAT_IF_COOLING_RANGE.min} max={WHAT_IF_COOLING_RANGE.max} onValue={(v) => set({ coolingFactor: v })} />
-        <NumberControl id="wi-front-share" label="Front share of the vehicle's braking" unit="0.5–0.8" value={settings.frontShare ?? null} placeholder={`now ${Math.round(resolved.frontShare * 100) / 100}`} min={WHAT_IF_FRONT_SHARE_RANGE.min} max={WHAT_IF_FRONT_SHARE_RANGE.max} onValue={(v) => set({ frontShare: v })} />
+        <NumberControl id="wi-front-share" label="Front share of the vehicle's braking" unit="fraction" errorUnit="" value={settings.frontShare ?? null} placeholder={`now ${Math.round(resolved.frontShare * 100) / 100}`} min={WHAT_IF_FRONT_SHARE_RANGE.min} max={WHAT_IF_FRONT_SHARE_RANGE.max} onValue={(v) => set({ frontShare: v })} />
         {electric && (
           <NumberControl id="wi-gain" label="Trailer controller gain" unit="× ideal" value={settings.trailerGain} placeholder={`now ${rig.trailer!.controllerGain ?? 1}`} min={0} max={2} onValue={(v) => set({ trailerGain: v })} />
         )}
