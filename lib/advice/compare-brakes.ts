@@ -37,8 +37,8 @@ export interface BrakeSetup {
 
 /** One setup on one descent. */
 export interface SetupFigures {
-  /** Peak temperature per position, °C. */
-  peaks: { position: BrakePosition; peakC: number }[];
+  /** Peak temperature per position and the brake's validity ceiling (docs/model.md, "Validity ceiling"), °C. */
+  peaks: { position: BrakePosition; peakC: number; ceilingC: number }[];
   /** Driving time at or above the warm line per position, s. */
   timeWarmOrAboveS: { position: BrakePosition; seconds: number }[];
   /** Stopping distance at the bottom, hot beside cold, from 80 km/h and 50 mph. */
@@ -96,7 +96,7 @@ export function compareBrakeSetups(input: {
     return input.descents.map((d): SetupFigures => {
       const o = outcomeOf(result, d.startDistanceM, d.endDistanceM);
       return {
-        peaks: o.positions.map((p) => ({ position: p.position, peakC: p.peakC })),
+        peaks: o.positions.map((p) => ({ position: p.position, peakC: p.peakC, ceilingC: p.ceilingC })),
         timeWarmOrAboveS: o.positions.map((p) => ({ position: p.position, seconds: p.timeWarmOrAboveS })),
         stopping: hotColdStops(result.model, o.positions.map((p) => p.endC)),
       };

@@ -184,7 +184,8 @@ export function shortfallText(s: Shortfall, system: UnitSystem, trailerNoun: str
   if (s.line === "hot") return `${brakes} would still reach about ${peak}, ${over} past their fade-likely line (${near})`;
   if (s.line === "boil") return `the ${owner} brake fluid would still reach about ${peak}, ${over} past its estimated boiling point (${near})`;
   if (Number.isNaN(s.lineC)) return `${brakes} could no longer hold the speed, so the brakes may fail there (${near})`;
-  return `${brakes} would reach about ${peak}, past the ${formatTemperature(s.lineC, system)} the model can describe, so the brakes may fail there (${near})`;
+  // Past the validity ceiling the peak is not a number to print (docs/model.md, "Validity ceiling").
+  return `${brakes} would go ${BEYOND_RANGE_TEXT}, past what the model can describe, so the brakes may fail there (${near})`;
 }
 
 /**

@@ -7,7 +7,8 @@
  * by how much past which line, and what would change it.
  */
 
-import { formatDistance, formatGrade, formatElevation, formatTemperature, formatTemperatureBand, type UnitSystem } from "@/lib/units";
+import type { BrakePosition } from "@/lib/thermal";
+import { BEYOND_RANGE_TEXT, formatDistance, formatGrade, formatElevation, formatTemperature, formatTemperatureBand, type UnitSystem } from "@/lib/units";
 import { GENERAL_CAUTIONS, STANDSTILL_CAUTIONS } from "./cautions";
 import { DEFAULT_ADVICE_SETTINGS } from "./settings";
 import {
@@ -94,13 +95,20 @@ export function renderRigAdvice(advice: RigAdvice, system: UnitSystem, options: 
  * @param note the note
  * @param system unit system
  * @param noun word for the trailer
+ * @param ceilingsC each position's validity ceiling, °C: an upper edge at or past it reads "beyond Fadeline's range"
  * @returns the sentence
  * @example bandNoteText({ descentIndex: 1, line: "hot", hits }, "metric", "caravan")
  */
-export function bandNoteText(note: BandNote, system: UnitSystem, noun: string): string {
+export function bandNoteText(note: BandNote, system: UnitSystem, noun: string, ceilingsC: Partial<Record<BrakePosition, number>> = {}): string {
   const what = note.line === "hot" ? "fade" : "caution";
   const hits = note.hits
-    .map((h) => `${h.position === "trailer" ? noun : h.position} up to about ${formatTemperatureBand(h.highC, null, Infinity, system)} (its line is ${formatTemperature(h.limitC, system)})`)
+    .map((h) => {
+      const who = h.position === "trailer" ? noun : h.position;
+      const line = `its line is ${formatTemperature(h.limitC, system)}`;
+      // An upper edge at or past the brake's validity ceiling is no number to print (docs/model.md, "Validity ceiling").
+      if (h.highC >= (ceilingsC[h.position] ?? Infinity)) return `${who} could go ${BEYOND_RANGE_TEXT} (${line})`;
+      return `${who} up to about ${formatTemperatureBand(h.highC, null, Infinity, system)} (${line})`;
+    })
     .join(", ");
   const sentence = `Could reach ${what} on descent ${note.descentIndex + 1} within the model's uncertainty: ${hits}.`;
   if (note.line !== "hot") return sentence;

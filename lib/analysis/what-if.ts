@@ -1,6 +1,7 @@
 /**
  * A what-if on a plan: one rig's conditions changed (descent speed, held gear, ambient temperature, trailer
- * controller gain, load, pad family), optionally with the plan's advice applied, re-run through the same
+ * controller gain, load, pad family, and two of the model's uncertain parameters: cooling and the front/rear
+ * heat split, docs/model.md "Uncertainty bands"), optionally with the plan's advice applied, re-run through the same
  * lib/thermal as the server. Pure and isomorphic: the plan page runs it in the browser on every change.
  */
 
@@ -28,16 +29,38 @@ export interface WhatIfSettings {
   trailerLoadKg: number | null;
   /** Pad family of the vehicle's disc brakes. */
   padFamily: PadFamily | null;
+  /**
+   * Multiplier on the brakes' convective cooling (dimensionless, 0.5–1.5: the spread of published correlations,
+   * docs/model.md "Cooling"). Absent in scenarios saved before it existed: same as null.
+   */
+  coolingFactor?: number | null;
+  /** Front share of the tow vehicle's service-brake work (0.5–0.8, docs/model.md "Heat split"). Absent: null. */
+  frontShare?: number | null;
 }
+
+/** Range of the what-if's cooling factor (dimensionless): BAND_COOLING_FACTOR of lib/thermal/ensemble.ts. */
+export const WHAT_IF_COOLING_RANGE = { min: 0.5, max: 1.5 } as const;
+/** Range of the what-if's front share of the service-brake work (docs/model.md, "Heat split"). */
+export const WHAT_IF_FRONT_SHARE_RANGE = { min: 0.5, max: 0.8 } as const;
 
 /** A what-if with nothing changed, for a rig. */
 export function emptyWhatIf(planRigId: string): WhatIfSettings {
-  return { planRigId, applyAdvice: false, descentSpeedMs: null, gear: null, ambientC: null, trailerGain: null, vehiclePayloadKg: null, trailerLoadKg: null, padFamily: null };
+  return { planRigId, applyAdvice: false, descentSpeedMs: null, gear: null, ambientC: null, trailerGain: null, vehiclePayloadKg: null, trailerLoadKg: null, padFamily: null, coolingFactor: null, frontShare: null };
+}
+
+/**
+ * A saved scenario's settings with every field present (scenarios saved before a field existed lack it).
+ * @param s the settings as stored
+ * @returns the settings, absent fields null
+ * @example normalizeWhatIf({ ...old }).coolingFactor // null
+ */
+export function normalizeWhatIf(s: WhatIfSettings): WhatIfSettings {
+  return { ...emptyWhatIf(s.planRigId), ...s, coolingFactor: s.coolingFactor ?? null, frontShare: s.frontShare ?? null };
 }
 
 /** Whether a what-if changes anything. */
 export function changesAnything(s: WhatIfSettings): boolean {
-  return s.applyAdvice || s.descentSpeedMs !== null || s.gear !== null || s.ambientC !== null || s.trailerGain !== null || s.vehiclePayloadKg !== null || s.trailerLoadKg !== null || s.padFamily !== null;
+  return s.applyAdvice || s.descentSpeedMs !== null || s.gear !== null || s.ambientC !== null || s.trailerGain !== null || s.vehiclePayloadKg !== null || s.trailerLoadKg !== null || s.padFamily !== null || (s.coolingFactor ?? null) !== null || (s.frontShare ?? null) !== null;
 }
 
 /**
@@ -65,7 +88,7 @@ export function whatIfRig(rig: Rig, s: WhatIfSettings): Rig {
 
 /**
  * The heat-run options as the what-if changes them: the plan's options, the advice if applied, then a control
- * on every descent for the speed and the gear, and the ambient temperature.
+ * on every descent for the speed and the gear, and the ambient temperature, cooling factor and front share.
  * @param base the plan's options
  * @param descents the route's descents
  * @param advice the rig's advice (used when `s.applyAdvice`)
@@ -84,7 +107,12 @@ export function whatIfOptions(base: HeatRunOptions, descents: readonly Descent[]
       });
     }
   }
-  const params = { ...(withAdvice.params ?? {}), ...(s.ambientC !== null ? { ambientC: s.ambientC } : {}) };
+  const params = {
+    ...(withAdvice.params ?? {}),
+    ...(s.ambientC !== null ? { ambientC: s.ambientC } : {}),
+    ...((s.coolingFactor ?? null) !== null ? { coolingFactor: s.coolingFactor! } : {}),
+    ...((s.frontShare ?? null) !== null ? { frontShare: s.frontShare! } : {}),
+  };
   return { ...withAdvice, params, controls };
 }
 

@@ -32,6 +32,9 @@ export const whatIfSettingsSchema = z.strictObject({
   vehiclePayloadKg: z.number().min(0, "Payload cannot be negative.").max(5000, "At most 5,000 kg.").nullable(),
   trailerLoadKg: z.number().min(0, "Load cannot be negative.").max(5000, "At most 5,000 kg.").nullable(),
   padFamily: z.enum(["organic", "ceramic", "semi-metallic"], { error: "Choose a pad family." }).nullable(),
+  // Optional so that scenarios saved before these existed stay valid (lib/analysis/what-if.ts normalizeWhatIf).
+  coolingFactor: z.number().min(0.5, "Cooling between 0.5 and 1.5.").max(1.5, "Cooling between 0.5 and 1.5.").nullable().optional(),
+  frontShare: z.number().min(0.5, "Front share between 0.5 and 0.8.").max(0.8, "Front share between 0.5 and 0.8.").nullable().optional(),
 });
 
 export const scenarioInputSchema = z.strictObject({

@@ -254,7 +254,13 @@ describe("when stops are not enough", () => {
     const a = advice.descents[0]!;
     expect(a.plan.outcome.worstClass).toBe("runaway");
     expect(a.shortfall!.line).toBe("runaway");
-    expect(renderDescentAdvice(a, "metric").lines[0]).toMatch(/the model can describe, so the brakes may fail there \(near [\d.]+ km\)/);
+    const line = renderDescentAdvice(a, "metric").lines[0]!;
+    expect(line).toMatch(/the model can describe, so the brakes may fail there \(near [\d.]+ km\)/);
+    // No temperature at or past a ceiling is printed as a number (docs/model.md, "Validity ceiling").
+    const lowestCeiling = Math.min(...a.plan.outcome.positions.map((p) => p.ceilingC));
+    const printed = [...line.matchAll(/(\d[\d,]*) °C/g)].map((m) => Number(m[1]!.replace(/,/g, "")));
+    expect(printed.filter((c) => c >= lowestCeiling)).toEqual([]);
+    expect(line).toContain("beyond Fadeline's range");
     expect(advice.verdict).toBe("not advised");
   });
 });

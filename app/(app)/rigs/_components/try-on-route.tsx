@@ -8,7 +8,8 @@ import { Notice } from "@/components/ui/notice";
 import type { AnalysisResult } from "@/lib/analysis/analyze";
 import { calibrationNote, type CalibrationUse } from "@/lib/analysis/calibration-note";
 import { api } from "@/lib/client/api";
-import { formatDistance, formatTemperature, type UnitSystem } from "@/lib/units";
+import { formatDistance, type UnitSystem } from "@/lib/units";
+import { peakWithBand } from "@/components/plan-view/heat-text";
 
 const CLASS_TEXT: Record<string, string> = { cool: "cool", warm: "warm (caution)", hot: "hot (fade likely)", "boil-risk": "boil risk (brake fluid)", runaway: "runaway (brakes may fail)" };
 
@@ -16,7 +17,10 @@ export function TryOnRoute({ rigId, routes, unitSystem }: { rigId: string; route
   const [routeId, setRouteId] = useState(routes[0]?.id ?? "");
   const run = useMutation({ mutationFn: () => api<{ analysis: AnalysisResult & { calibration: CalibrationUse | null } }>("/api/analyses", { body: { rigId, routeId, detail: "none" } }).then((r) => r.analysis) });
   if (routes.length === 0) return <p className="text-sm text-ink-muted">Upload a route first, on Routes.</p>;
-  const t = (c: number) => formatTemperature(c, unitSystem);
+  // A peak with its band, "about 240 °C (210–290)"; at or past the brake's ceiling "beyond Fadeline's range".
+  const ceiling = (position: string) => run.data?.positions.find((p) => p.position === position)?.validityCeilingC ?? Infinity;
+  const t = (p: { position: string; peakC: number; beyondValidity: boolean; band?: { lowC: number; highC: number } }) =>
+    peakWithBand(p.peakC, p.beyondValidity ? -Infinity : ceiling(p.position), p.band, unitSystem);
   return (
     <div className="space-y-4">
       <div className="flex flex-wrap items-end gap-3">
@@ -33,7 +37,7 @@ export function TryOnRoute({ rigId, routes, unitSystem }: { rigId: string; route
       {run.data && (
         <div className="space-y-2" data-testid="try-result">
           <p className="text-sm">
-            Hottest on the route: {run.data.peaks.map((p) => `${p.position} ${t(p.peakC)} at ${formatDistance(p.atM, unitSystem)}`).join("; ")}. Worst: {CLASS_TEXT[run.data.worstClass]}.
+            Hottest on the route: {run.data.peaks.map((p) => `${p.position} ${t(p)} at ${formatDistance(p.atM, unitSystem)}`).join("; ")}. Worst: {CLASS_TEXT[run.data.worstClass]}.
           </p>
           <div className="overflow-x-auto">
             <table className="w-full min-w-[28rem] text-left text-sm">
@@ -42,7 +46,7 @@ export function TryOnRoute({ rigId, routes, unitSystem }: { rigId: string; route
                 {run.data.descents.map((d, i) => (
                   <tr key={i}>
                     <td className="py-1">{formatDistance(d.startM, unitSystem)} – {formatDistance(d.endM, unitSystem)}</td>
-                    {d.positions.map((p) => <td key={p.position}>{t(p.peakC)}</td>)}
+                    {d.positions.map((p) => <td key={p.position}>{t(p)}</td>)}
                     <td>{CLASS_TEXT[d.worstClass]}</td>
                   </tr>
                 ))}

@@ -10,13 +10,19 @@ import { compareBrakeSetups, withBrakeSetup, type BrakeSetup, type SetupFigures 
 import { api } from "@/lib/client/api";
 import type { Descent } from "@/lib/route";
 import type { FluidClass, HeatRunOptions, PadFamily, Rig } from "@/lib/thermal";
-import { formatDistance, formatTemperature, type UnitSystem } from "@/lib/units";
+import { formatDistance, type UnitSystem } from "@/lib/units";
+import { peakText } from "@/lib/advice/render-parts";
+import { worstPosition } from "@/components/plan-view/heat-text";
 import { useRouteModel } from "./use-route-model";
 import { positionLabel } from "./words";
 
 type Kind = "vented-disc" | "solid-disc" | "drum";
 
-const worstPeak = (f: SetupFigures) => Math.max(...f.peaks.map((p) => p.peakC));
+/** The worst brake's peak in words: "beyond Fadeline's range" at or past its ceiling. */
+const worstPeak = (f: SetupFigures, u: UnitSystem) => {
+  const p = f.peaks[worstPosition(f.peaks)];
+  return p ? peakText(p.peakC, p.ceilingC, u) : "";
+};
 const metres = (m: number, u: UnitSystem) => (u === "metric" ? `${Math.round(m)} m` : `${Math.round(m / 0.3048)} ft`);
 const minutes = (s: number) => (s < 30 ? "none" : `${Math.round(s / 60)} min`);
 const stop80 = (f: SetupFigures) => f.stopping.find((s) => s.from === "80 km/h") ?? f.stopping[0]!;
@@ -145,8 +151,8 @@ export function BrakeComparison({ planId, organisationId, rigName, rig, options,
                     <td className="px-3 py-2">↓{r.descentIndex + 1} at {formatDistance(r.descent.startDistanceM, u)}</td>
                     {[r.base, r.variant].map((f, k) => (
                       <td key={k} className="px-3 py-2 tabular-nums">
-                        <span className="font-semibold">{formatTemperature(worstPeak(f), u)}</span>
-                        <span className="block text-xs text-ink-muted">{f.peaks.map((p) => `${positionLabel(p.position, rig)} ${formatTemperature(p.peakC, u)}`).join(", ")}</span>
+                        <span className="font-semibold">{worstPeak(f, u)}</span>
+                        <span className="block text-xs text-ink-muted">{f.peaks.map((p) => `${positionLabel(p.position, rig)} ${peakText(p.peakC, p.ceilingC, u)}`).join(", ")}</span>
                       </td>
                     ))}
                     <td className="px-3 py-2">{minutes(worstTime(r.base))} → {minutes(worstTime(r.variant))}</td>

@@ -6,22 +6,25 @@
  * live what-if run in the browser with the same lib/thermal the server uses.
  */
 import Link from "next/link";
-import { useCallback, useMemo, useState } from "react";
+import { useCallback, useEffect, useMemo, useState } from "react";
 import { ElevationProfile } from "@/components/elevation-profile/elevation-profile";
 import { heatColouring, HEAT_COLOURS, CLASS_LABELS, type PositionThresholds } from "@/components/plan-view/heat-colours";
 import { HeatChart } from "@/components/plan-view/heat-chart";
+import { ceilingsByPosition, peakWithBand, worstPosition, type Edges } from "@/components/plan-view/heat-text";
 import { GradeLegend } from "@/components/route-map/grade-legend";
 import { RouteMap, type MapPin } from "@/components/route-map/route-map";
 import { Button } from "@/components/ui/button";
 import { Card, CardHeader } from "@/components/ui/card";
 import { Notice } from "@/components/ui/notice";
-import { adviseRig, GENERAL_CAUTIONS, worstVerdict, type RigAdvice, type RunOutcome } from "@/lib/advice";
+import { adviseRig, GENERAL_CAUTIONS, shortfallText, speedLimitText, worstVerdict, type RigAdvice, type RunOutcome } from "@/lib/advice";
+import { bandNoteText } from "@/lib/advice/render";
+import { gearText, peakText } from "@/lib/advice/render-parts";
 import type { PlanRigResult } from "@/lib/analysis/plan-run";
 import { changesAnything, emptyWhatIf, runWhatIf, type WhatIfResult, type WhatIfSettings } from "@/lib/analysis/what-if";
 import type { Descent, RouteView } from "@/lib/route";
-import { STEP_CLASSES, type HeatRunOptions, type Rig } from "@/lib/thermal";
-import { formatDistance, formatTemperature, type UnitSystem } from "@/lib/units";
-import { AdviceList } from "./advice-list";
+import { peakBand, runBand, STEP_CLASSES, type HeatBand, type HeatRunOptions, type Rig } from "@/lib/thermal";
+import { formatDistance, formatMass, formatTemperature, type UnitSystem } from "@/lib/units";
+import { AdviceList, LegalReasons } from "./advice-list";
 import { ConvoyMatrix } from "./convoy-matrix";
 import { useRouteModel } from "./use-route-model";
 import { WhatIfPanel, type SavedScenario } from "./what-if-panel";
@@ -38,27 +41,48 @@ export interface PlanViewMember {
   result: PlanRigResult;
 }
 
-const peakOf = (o: RunOutcome) => Math.max(...o.positions.map((p) => p.peakC));
 const classRank = (c: string) => STEP_CLASSES.indexOf(c as (typeof STEP_CLASSES)[number]);
 
-/** @private The hottest sample of a trace over all positions. */
-function hottest(distanceM: ArrayLike<number>, rotorC: ArrayLike<number>[]) {
-  let best = { atM: 0, c: -Infinity };
-  for (const col of rotorC) for (let i = 0; i < col.length; i++) if ((col[i] as number) > best.c) best = { atM: distanceM[i] as number, c: col[i] as number };
+/**
+ * @private The hottest sample of a trace over all positions, first one at or past its ceiling (docs/model.md,
+ * "Validity ceiling"), with that position's ceiling.
+ */
+function hottest(distanceM: ArrayLike<number>, rotorC: ArrayLike<number>[], ceilingsC: readonly number[]) {
+  let best = { atM: 0, c: -Infinity, ceilingC: Infinity, beyond: false };
+  rotorC.forEach((col, j) => {
+    const ceilingC = ceilingsC[j] ?? Infinity;
+    for (let i = 0; i < col.length; i++) {
+      const c = col[i] as number;
+      const beyond = c >= ceilingC;
+      if ((beyond && !best.beyond) || (beyond === best.beyond && c > best.c)) best = { atM: distanceM[i] as number, c, ceilingC, beyond };
+    }
+  });
   return best;
 }
 
-function PeakRow({ label, outcome, units }: { label: string; outcome: RunOutcome | null; units: UnitSystem }) {
+function PeakRow({ label, outcome, band, units }: { label: string; outcome: RunOutcome | null; band?: readonly Edges[] | null; units: UnitSystem }) {
   if (!outcome) return null;
+  const j = worstPosition(outcome.positions);
+  const p = outcome.positions[j]!;
   return (
     <div className="flex items-center justify-between gap-2">
       <dt className="text-ink-muted">{label}</dt>
-      <dd className="flex items-center gap-1.5 font-medium tabular-nums">
-        <span aria-hidden="true" className="inline-block h-2 w-2 rounded-full" style={{ background: HEAT_COLOURS[outcome.worstClass] }} />
-        {formatTemperature(peakOf(outcome), units)} · {CLASS_LABELS[outcome.worstClass].toLowerCase()}
+      <dd className="flex items-center gap-1.5 text-right font-medium tabular-nums">
+        <span aria-hidden="true" className="inline-block h-2 w-2 shrink-0 rounded-full" style={{ background: HEAT_COLOURS[outcome.worstClass] }} />
+        {peakWithBand(p.peakC, p.ceilingC, band?.[j], units)} · {CLASS_LABELS[outcome.worstClass].toLowerCase()}
       </dd>
     </div>
   );
+}
+
+/** When the browser is idle (or soon, where it has no idle callback): the what-if's band waits for typing to pause. */
+function whenIdle(work: () => void): () => void {
+  if (typeof window.requestIdleCallback === "function") {
+    const id = window.requestIdleCallback(work, { timeout: 300 });
+    return () => window.cancelIdleCallback(id);
+  }
+  const id = window.setTimeout(work, 50);
+  return () => window.clearTimeout(id);
 }
 
 export function PlanView({
@@ -125,8 +149,40 @@ export function PlanView({
   }, [model.route, whatIf, member, descents, advice]);
   const whatIfRun = run && "result" in run ? run.result : null;
 
+  // The what-if's band (lib/thermal runBand, about 20 ms on 300 km) runs after the nominal one, once the browser
+  // is idle, so typing stays smooth; a newer what-if cancels a pending one.
+  const [whatIfBand, setWhatIfBand] = useState<{ run: WhatIfResult; band: HeatBand | null; ms: number } | null>(null);
+  useEffect(() => {
+    if (!model.route || !whatIfRun) return;
+    const route = model.route;
+    return whenIdle(() => {
+      const t0 = performance.now();
+      let band: HeatBand | null = null;
+      try {
+        band = runBand(route, whatIfRun.rig, whatIfRun.options, {}, whatIfRun.result);
+      } catch {
+        band = null; // the nominal run stands on its own; the chart then says no range is drawn
+      }
+      setWhatIfBand({ run: whatIfRun, band, ms: performance.now() - t0 });
+    });
+  }, [model.route, whatIfRun]);
+  const bandNow = whatIfRun && whatIfBand?.run === whatIfRun ? whatIfBand : null;
+  const whatIfEdges = useMemo(() => {
+    if (!whatIfRun || !bandNow?.band) return null;
+    const band = bandNow.band;
+    return descents.map((d) =>
+      whatIfRun.result.positions.map((_, j) => {
+        const b = peakBand(band, j, d.startDistanceM, d.endDistanceM);
+        return { lowC: b.lowC, highC: b.highC };
+      }),
+    );
+  }, [whatIfRun, bandNow, descents]);
+
   const positions: PositionThresholds[] = analysis.positions.map((p) => ({ label: positionLabel(p.position, member.rig), warmC: p.thresholds.warmC, hotC: p.thresholds.hotC }));
   const planTrace = analysis.trace!;
+  // eslint-disable-next-line react-hooks/exhaustive-deps
+  const chartLabels = useMemo(() => positions.map((p) => p.label), [member.planRigId]);
+  const ceilingsC = useMemo(() => analysis.positions.map((p) => p.validityCeilingC), [analysis]);
   const classTrace = whatIfRun ? { distanceM: whatIfRun.result.trace.distanceM, worstClass: whatIfRun.result.trace.worstClass } : { distanceM: planTrace.distanceM, worstClass: planTrace.worstClass };
   const colouringKey = `${member.planRigId}-${whatIfRun ? JSON.stringify(whatIf) : "plan"}-${units}`;
   // eslint-disable-next-line react-hooks/exhaustive-deps
@@ -134,15 +190,15 @@ export function PlanView({
 
   const pins = useMemo((): MapPin[] => {
     const out: MapPin[] = [];
-    const hot = whatIfRun ? hottest(whatIfRun.result.trace.distanceM, whatIfRun.result.trace.rotorC) : hottest(planTrace.distanceM, planTrace.rotorC);
-    if (Number.isFinite(hot.c)) out.push({ id: "hottest", distanceM: hot.atM, label: `Hottest ${formatTemperature(hot.c, units)}`, colour: "#16232a" });
+    const hot = whatIfRun ? hottest(whatIfRun.result.trace.distanceM, whatIfRun.result.trace.rotorC, ceilingsC) : hottest(planTrace.distanceM, planTrace.rotorC, ceilingsC);
+    if (Number.isFinite(hot.c)) out.push({ id: "hottest", distanceM: hot.atM, label: hot.beyond ? "Hottest: beyond Fadeline's range" : `Hottest ${peakText(hot.c, hot.ceilingC, units)}`, colour: "#16232a" });
     for (const d of advice.descents) {
       const p = d.plan.plan;
-      if (p.gear !== undefined || p.speedMs !== undefined) out.push({ id: `gear-${d.descentIndex}`, distanceM: d.descent.startDistanceM, label: `↓${d.descentIndex + 1}: ${p.gear !== undefined ? `gear ${p.gear}` : ""}${p.gear !== undefined && p.speedMs !== undefined ? ", " : ""}${p.speedMs !== undefined ? `${Math.floor(units === "metric" ? p.speedMs * 3.6 : (p.speedMs * 3600) / 1609.344)} ${units === "metric" ? "km/h" : "mph"}` : ""}`, colour: "#1f5a4f" });
+      if (p.gear !== undefined || p.speedMs !== undefined) out.push({ id: `gear-${d.descentIndex}`, distanceM: d.descent.startDistanceM, label: `↓${d.descentIndex + 1}: ${p.gear !== undefined ? `gear ${gearText(p.gear, d.highRangeGears)}` : ""}${p.gear !== undefined && p.speedMs !== undefined ? ", " : ""}${p.speedMs !== undefined ? speedLimitText(p.speedMs, units) : ""}`, colour: "#1f5a4f" });
       d.plan.stops.forEach((s, k) => out.push({ id: `stop-${d.descentIndex}-${k}`, distanceM: s.atM, label: `Stop ${Math.ceil(s.durationS / 60)} min`, colour: "#7a4b9b" }));
     }
     return out;
-  }, [whatIfRun, planTrace, advice, units]);
+  }, [whatIfRun, planTrace, advice, units, ceilingsC]);
 
   const adviseWhatIf = useCallback(() => {
     if (!model.route || !whatIfRun) return;
@@ -162,6 +218,24 @@ export function PlanView({
   }, [model.route, whatIfRun, whatIf, descents, member, advice.waypoints]);
 
   const verdictText = VERDICT_TEXT[verdict];
+  // Why: the ratings and rules first (they decide on their own), then the descents where even the proven plan
+  // leaves a brake past a line or where the brakes may fail as planned, then where a band straddles a line.
+  const legal = members.filter((m) => m.result.advice.legalReasons.length > 0);
+  const who = (m: PlanViewMember) => (members.length > 1 ? `${m.label}: ` : "");
+  const heatReasons = members.flatMap((m) => {
+    const n = trailerNoun(m.rig);
+    return m.result.advice.descents.flatMap((d) => {
+      const at = `↓${d.descentIndex + 1}`;
+      if (d.shortfall !== null) return [`${who(m)}on ${at} the advice is not enough: ${shortfallText(d.shortfall, units, n)}.`];
+      if (d.nothingIsEnough) return [`${who(m)}on ${at} no gear, held speed or cool-down stop keeps the brakes out of the fade range.`];
+      if (d.baseline.worstClass === "runaway") return [`${who(m)}on ${at}, as planned, the brakes may fail (runaway); follow the advice for this descent.`];
+      return [];
+    });
+  });
+  const uncertainty = members.flatMap((m) => {
+    const ceilings = ceilingsByPosition(m.result.analysis.positions.map((p) => ({ position: p.position, ceilingC: p.validityCeilingC })));
+    return m.result.advice.uncertainty.map((note) => `${who(m)}${bandNoteText(note, units, trailerNoun(m.rig), ceilings)}`);
+  });
   const weakest = members.filter((m) => m.result.advice.verdict === verdict);
   const gears = analysis.model.overallRatios.length;
   const busyNote = whatIfOpen
@@ -172,7 +246,7 @@ export function PlanView({
         : run && "error" in run
           ? `The model refused this what-if: ${run.error}`
           : run && "ms" in run
-            ? `Recomputed in the browser in ${run.ms.toFixed(0)} ms.`
+            ? `Recomputed in the browser in ${run.ms.toFixed(0)} ms${bandNow ? (bandNow.band ? `; likely range in ${bandNow.ms.toFixed(0)} ms more` : "; the likely range could not be worked out") : "; working out the likely range…"}.`
             : null
     : null;
 
@@ -185,7 +259,28 @@ export function PlanView({
       >
         <p className="text-xs font-medium uppercase tracking-wide text-ink-muted">Verdict for the convoy</p>
         <p className="text-2xl font-semibold">{verdictText.title}</p>
-        <p className="mt-1 max-w-3xl text-sm">{verdictText.meaning}</p>
+        {legal.length > 0 && (
+          <div className="mt-2 grid max-w-3xl gap-2">
+            {legal.map((m) => (
+              <LegalReasons key={m.planRigId} reasons={m.result.advice.legalReasons} who={`${m.label} (${m.rigName})`} />
+            ))}
+          </div>
+        )}
+        <p className="mt-2 max-w-3xl text-sm">{verdictText.meaning}</p>
+        {heatReasons.length > 0 && (
+          <ul className="mt-2 max-w-3xl list-disc space-y-1 pl-5 text-sm" data-testid="verdict-reasons">
+            {heatReasons.map((r) => (
+              <li key={r}>{r}</li>
+            ))}
+          </ul>
+        )}
+        {uncertainty.length > 0 && (
+          <ul className="mt-2 max-w-3xl list-disc space-y-1 pl-5 text-sm" data-testid="verdict-uncertainty">
+            {uncertainty.map((r) => (
+              <li key={r}>{r}</li>
+            ))}
+          </ul>
+        )}
         {members.length > 1 && verdict !== "clear" && weakest.length < members.length && (
           <p className="mt-1 text-sm">
             Judged by the weakest {weakest.length === 1 ? "rig" : "rigs"}: {weakest.map((m) => `${m.label} (${m.rigName})`).join(", ")}.
@@ -224,11 +319,14 @@ export function PlanView({
         <div className="border-t border-line px-3 pt-3 pb-2 sm:px-5">
           <ElevationProfile view={view} unitSystem={units} colouring={colouring} hoverDistanceM={hoverM} onHoverDistance={setHoverM} height={180} />
           <HeatChart
-            positions={positions.map((p) => p.label)}
+            positions={chartLabels}
             warmC={Math.min(...positions.map((p) => p.warmC))}
             hotC={Math.min(...positions.map((p) => p.hotC))}
+            ceilingsC={ceilingsC}
             trace={planTrace}
+            band={planTrace.band ?? null}
             whatIf={whatIfRun ? whatIfRun.result.trace : null}
+            whatIfBand={bandNow?.band ?? null}
             unitSystem={units}
             hoverDistanceM={hoverM}
             onHoverDistance={setHoverM}
@@ -249,6 +347,7 @@ export function PlanView({
               planId={planId}
               rig={member.rig}
               gears={gears}
+              resolved={{ coolingFactor: analysis.model.params.coolingFactor, frontShare: analysis.model.params.frontShare ?? 0.65 }}
               settings={whatIf}
               onChange={changeWhatIf}
               unitSystem={units}
@@ -258,15 +357,15 @@ export function PlanView({
               busyNote={busyNote}
             />
             {whatIfRun && (
-              <div className="grid gap-3 border-t border-line pt-4" data-testid="what-if-peaks">
+              <div className="grid gap-3 border-t border-line pt-4" data-testid="what-if-peaks" data-band={bandNow?.band ? "ready" : "pending"}>
                 <h3 className="text-sm font-semibold">Descents with this what-if</h3>
                 <div className="grid gap-3 sm:grid-cols-2 lg:grid-cols-3">
                   {descents.map((d, i) => (
                     <dl key={i} className="rounded-md border border-line p-3 text-sm" data-testid="what-if-descent" data-class={whatIfRun.descents[i]!.worstClass}>
                       <p className="mb-1 font-semibold">↓{i + 1} at {formatDistance(d.startDistanceM, units)}</p>
-                      <PeakRow label="As planned" outcome={advice.proof[i]!.asPlanned} units={units} />
-                      <PeakRow label="What-if" outcome={whatIfRun.descents[i]!} units={units} />
-                      <p className="mt-1 text-xs text-ink-muted">{whatIfRun.descents[i]!.positions.map((p) => `${positionLabel(p.position, member.rig)} ${formatTemperature(p.peakC, units)}`).join(", ")}</p>
+                      <PeakRow label="As planned" outcome={advice.proof[i]!.asPlanned} band={advice.proof[i]!.band?.asPlanned} units={units} />
+                      <PeakRow label="What-if" outcome={whatIfRun.descents[i]!} band={whatIfEdges?.[i]} units={units} />
+                      <p className="mt-1 text-xs text-ink-muted">{whatIfRun.descents[i]!.positions.map((p, j) => `${positionLabel(p.position, member.rig)} ${peakWithBand(p.peakC, p.ceilingC, whatIfEdges?.[i]?.[j], units)}`).join(", ")}</p>
                     </dl>
                   ))}
                 </div>
@@ -310,10 +409,10 @@ export function PlanView({
           <summary className="cursor-pointer font-semibold">How these figures are made (the model&apos;s assumptions)</summary>
           <ul className="mt-2 list-disc space-y-1 pl-4 text-ink-soft">
             <li>Model {analysis.modelVersion}: energy balance of the combination on every step of the route, split between engine braking, the trailer brakes and the vehicle&apos;s front and rear brakes; convective and radiant cooling of each rotor and drum.</li>
-            <li>Air {formatTemperature(analysis.model.params.ambientC, units)}; combination {Math.round(analysis.model.massKg)} kg{analysis.model.trailerKg > 0 ? `, of which the ${noun} ${Math.round(analysis.model.trailerKg)} kg` : ""}.</li>
+            <li>Air {formatTemperature(analysis.model.params.ambientC, units)}; combination {formatMass(analysis.model.massKg, units)}{analysis.model.trailerKg > 0 ? `, of which the ${noun} ${formatMass(analysis.model.trailerKg, units)}` : ""}.</li>
             {analysis.positions.map((p) => (
               <li key={p.position}>
-                {positionLabel(p.position, member.rig)}: {p.kind.replace("-", " ")} {Math.round(p.massKg * 10) / 10} kg, {p.padFamily}; caution from {formatTemperature(p.thresholds.warmC, units)}, fade likely from {formatTemperature(p.thresholds.hotC, units)} (estimates).
+                {positionLabel(p.position, member.rig)}: {p.kind.replace("-", " ")} {formatMass(p.massKg, units)}, {p.padFamily}; caution from {formatTemperature(p.thresholds.warmC, units)}, fade likely from {formatTemperature(p.thresholds.hotC, units)} (estimates).
               </li>
             ))}
             {analysis.notes.map((n) => (

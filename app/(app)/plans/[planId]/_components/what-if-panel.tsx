@@ -4,7 +4,7 @@ import { useState } from "react";
 import { toast } from "sonner";
 import { Button } from "@/components/ui/button";
 import { controlClasses } from "@/components/ui/field";
-import { changesAnything, emptyWhatIf, type WhatIfSettings } from "@/lib/analysis/what-if";
+import { changesAnything, emptyWhatIf, normalizeWhatIf, WHAT_IF_COOLING_RANGE, WHAT_IF_FRONT_SHARE_RANGE, type WhatIfSettings } from "@/lib/analysis/what-if";
 import { api, ApiError } from "@/lib/client/api";
 import { ordinal } from "@/lib/advice";
 import { KG_PER_LB, M_PER_MI, type UnitSystem } from "@/lib/units";
@@ -32,7 +32,7 @@ const isAutomatic = (rig: Rig) => {
 };
 
 /** A number input that keeps what is typed and reports a value (or null when cleared) once it parses. */
-function NumberControl({ id, label, unit, value, placeholder, min, max, step, onValue }: { id: string; label: string; unit: string; value: number | null; placeholder: string; min: number; max: number; step?: number; onValue: (v: number | null) => void }) {
+function NumberControl({ id, label, unit, errorUnit = unit, value, placeholder, min, max, onValue }: { id: string; label: string; unit: string; errorUnit?: string; value: number | null; placeholder: string; min: number; max: number; onValue: (v: number | null) => void }) {
   const [text, setText] = useState(value === null ? "" : String(value));
   const [lastValue, setLastValue] = useState(value);
   if (value !== lastValue) {
@@ -60,20 +60,22 @@ function NumberControl({ id, label, unit, value, placeholder, min, max, step, on
           else if (Number.isFinite(v) && v >= min && v <= max) onValue(v);
         }}
       />
-      {bad && <p id={`${id}-error`} className="mt-1 text-xs text-danger-700">Between {min} and {max} {unit}.</p>}
+      {bad && <p id={`${id}-error`} className="mt-1 text-xs text-danger-700">Between {min} and {max}{errorUnit ? ` ${errorUnit}` : ""}.</p>}
     </div>
   );
 }
 
 /**
- * The what-if controls for one rig: descent speed, held gear, air temperature, trailer controller gain, load and
- * pad family, and the plan's advice applied. Empty means "as in the plan". Planners and owners save a what-if
+ * The what-if controls for one rig: descent speed, held gear, air temperature, trailer controller gain, load,
+ * pad family, and two of the model's uncertain parameters (cooling and the front/rear heat split, docs/model.md
+ * "Uncertainty bands"), and the plan's advice applied. Empty means "as in the plan". Planners and owners save a what-if
  * as a named scenario; everyone can load one.
  */
 export function WhatIfPanel({
   planId,
   rig,
   gears,
+  resolved,
   settings,
   onChange,
   unitSystem: u,
@@ -85,6 +87,8 @@ export function WhatIfPanel({
   planId: string;
   rig: Rig;
   gears: number;
+  /** The plan's own values of the model parameters the what-if can move (shown as "now …"). */
+  resolved: { coolingFactor: number; frontShare: number };
   settings: WhatIfSettings;
   onChange: (s: WhatIfSettings) => void;
   unitSystem: UnitSystem;
@@ -150,6 +154,8 @@ export function WhatIfPanel({
         {rig.trailer && (
           <NumberControl id="wi-trailer-load" label={`Load in the ${trailerNoun(rig)}`} unit={massUnit} value={settings.trailerLoadKg === null ? null : massToUser(settings.trailerLoadKg, u)} placeholder={`now ${massToUser(rig.load.trailerLoadKg, u)}`} min={0} max={u === "metric" ? 5000 : 11000} onValue={(v) => set({ trailerLoadKg: v === null ? null : massFromUser(v, u) })} />
         )}
+        <NumberControl id="wi-cooling" label="Brake cooling" unit="× the model's" value={settings.coolingFactor ?? null} placeholder={`now ${resolved.coolingFactor}`} min={WHAT_IF_COOLING_RANGE.min} max={WHAT_IF_COOLING_RANGE.max} onValue={(v) => set({ coolingFactor: v })} />
+        <NumberControl id="wi-front-share" label="Front share of the vehicle's braking" unit="fraction" errorUnit="" value={settings.frontShare ?? null} placeholder={`now ${Math.round(resolved.frontShare * 100) / 100}`} min={WHAT_IF_FRONT_SHARE_RANGE.min} max={WHAT_IF_FRONT_SHARE_RANGE.max} onValue={(v) => set({ frontShare: v })} />
         {electric && (
           <NumberControl id="wi-gain" label="Trailer controller gain" unit="× ideal" value={settings.trailerGain} placeholder={`now ${rig.trailer!.controllerGain ?? 1}`} min={0} max={2} onValue={(v) => set({ trailerGain: v })} />
         )}
@@ -185,7 +191,7 @@ export function WhatIfPanel({
             <ul className="flex flex-wrap gap-2">
               {mine.map((s) => (
                 <li key={s.id}>
-                  <Button variant="secondary" size="sm" onClick={() => onChange(s.settings)} title={`Saved by ${s.createdByName ?? "a former member"} on ${new Date(s.createdAt).toLocaleDateString()}`}>
+                  <Button variant="secondary" size="sm" onClick={() => onChange(normalizeWhatIf(s.settings))} title={`Saved by ${s.createdByName ?? "a former member"} on ${new Date(s.createdAt).toLocaleDateString()}`}>
                     {s.name}
                   </Button>
                 </li>

@@ -11,7 +11,7 @@ export const VERDICT_TEXT: Readonly<Record<Verdict, { title: string; meaning: st
   },
   "not advised": {
     title: "Not advised",
-    meaning: "On at least one descent even the gentlest plan leaves a brake in the fade range or the fluid near boiling. Consider another route, less load, or a brake upgrade assessed by a licensed mechanic.",
+    meaning: "At least one rig should not make this trip as planned and loaded: the reasons are listed here. Consider another route, less load, or a brake upgrade assessed by a licensed mechanic.",
     tone: "danger",
   },
 };

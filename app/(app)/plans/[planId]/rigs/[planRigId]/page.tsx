@@ -6,7 +6,8 @@ import { Card, CardHeader, PageHeader } from "@/components/ui/card";
 import { Notice } from "@/components/ui/notice";
 import { GENERAL_CAUTIONS } from "@/lib/advice";
 import { can } from "@/lib/auth/permissions";
-import { formatDistance, formatTemperature } from "@/lib/units";
+import { formatDistance } from "@/lib/units";
+import { peakWithBand } from "@/components/plan-view/heat-text";
 import { AdviceList } from "../../_components/advice-list";
 import { BrakeComparison } from "../../_components/brake-comparison";
 import { positionLabel, trailerNoun, VERDICT_TEXT } from "../../_components/words";
@@ -69,8 +70,8 @@ export default async function PlanRigPage({ params }: { params: Promise<{ planId
                       <td className="px-3 py-2">↓{row.descentIndex + 1} {formatDistance(d.startDistanceM, units)} – {formatDistance(d.endDistanceM, units)}</td>
                       {row.asPlanned.positions.map((p, k) => (
                         <td key={p.position} className="px-3 py-2 tabular-nums">
-                          {formatTemperature(p.peakC, units)}
-                          <span className="block text-xs text-ink-muted">with advice {formatTemperature(row.withAdvice.positions[k]!.peakC, units)}</span>
+                          {peakWithBand(p.peakC, p.ceilingC, row.band?.asPlanned[k], units)}
+                          <span className="block text-xs text-ink-muted">with advice {peakWithBand(row.withAdvice.positions[k]!.peakC, row.withAdvice.positions[k]!.ceilingC, row.band?.withAdvice[k], units)}</span>
                         </td>
                       ))}
                       <td className="px-3 py-2">
