@@ -79,7 +79,7 @@ export function renderDescentAdvice(advice: DescentAdvice, system: UnitSystem, o
  */
 export function renderRigAdvice(advice: RigAdvice, system: UnitSystem, options: RenderOptions = {}): string[] {
   const out = [`Verdict: ${advice.verdict}.`, ...advice.legalReasons.map((r) => `Not advised as loaded: ${r}`)];
-  for (const note of advice.uncertainty) out.push(bandNoteText(note, system, options.trailerNoun ?? "caravan"));
+  out.push(...bandNotesText(advice.uncertainty, system, options.trailerNoun ?? "caravan"));
   for (const d of advice.descents) {
     const text = renderDescentAdvice(d, system, options);
     out.push("", text.title, ...text.lines, ...text.cautions);
@@ -114,6 +114,42 @@ export function bandNoteText(note: BandNote, system: UnitSystem, noun: string, c
   if (note.line !== "hot") return sentence;
   const remedies = (["less-load", "brake-upgrade", "another-route"] as const).map((r) => remedyText(r, { trailerNoun: noun, gain: null }));
   return `${sentence} What would change it: ${remedies.slice(0, -1).join(", ")} or ${remedies.at(-1)}.`;
+}
+
+/**
+ * Band notes in words, one sentence per line reached, listing its descents: "Could reach fade on descents 1,
+ * 3 and 6 within the model's uncertainty: caravan up to about 320 °C (its line is 260 °C). What would change
+ * it: …". Each brake's figure is its highest upper edge over those descents.
+ * @param notes the notes (RigAdvice.uncertainty)
+ * @param system unit system
+ * @param noun word for the trailer
+ * @param ceilingsC validity ceiling per position, °C (an upper edge past it is not printed as a number)
+ * @returns one sentence per line reached (fade first)
+ * @example bandNotesText(advice.uncertainty, "metric", "caravan")
+ */
+export function bandNotesText(
+  notes: readonly BandNote[],
+  system: UnitSystem,
+  noun: string,
+  ceilingsC: Partial<Record<BrakePosition, number>> = {},
+): string[] {
+  const out: string[] = [];
+  for (const line of ["hot", "warm"] as const) {
+    const of = notes.filter((n) => n.line === line);
+    if (of.length === 0) continue;
+    const hits = new Map<BrakePosition, { position: BrakePosition; peakC: number; highC: number; limitC: number }>();
+    for (const n of of) {
+      for (const h of n.hits) {
+        const seen = hits.get(h.position);
+        if (seen === undefined || h.highC > seen.highC) hits.set(h.position, h);
+      }
+    }
+    const merged: BandNote = { descentIndex: of[0]!.descentIndex, line, hits: [...hits.values()] };
+    const numbers = of.map((n) => String(n.descentIndex + 1));
+    const list = numbers.length === 1 ? `descent ${numbers[0]}` : `descents ${numbers.slice(0, -1).join(", ")} and ${numbers.at(-1)}`;
+    out.push(bandNoteText(merged, system, noun, ceilingsC).replace(`on descent ${merged.descentIndex + 1} `, `on ${list} `));
+  }
+  return out;
 }
 
 /** @private The combined plan as one sentence, with its result; when it is not enough, why and what would change it. */

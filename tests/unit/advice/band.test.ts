@@ -6,6 +6,7 @@
 
 import { describe, expect, it } from "vitest";
 import { adviseRig, adviseWithBands, judgeOnBand, renderRigAdvice, type RigAdvice } from "@/lib/advice";
+import { bandNotesText } from "@/lib/advice/render";
 import { oneDescent, UTE_VAN } from "./scenarios";
 
 const route = oneDescent(-0.08, 3000);
@@ -66,5 +67,22 @@ describe("the verdict on the band's upper edge", () => {
     const judged = judgeOnBand("clear", proofWith(plain.proof[0]!.withAdvice.positions[0]!.warmC + 1), false);
     expect(judged.verdict).toBe("clear with advice");
     expect(judged.notes.map((n) => n.line)).toContain("warm");
+  });
+});
+
+describe("band notes in words", () => {
+  it("one sentence per line, listing its descents, with each brake's highest upper edge", () => {
+    const hit = (highC: number) => ({ position: "trailer" as const, peakC: 240, highC, limitC: 260 });
+    const notes = [
+      { descentIndex: 0, line: "hot" as const, hits: [hit(270)] },
+      { descentIndex: 2, line: "hot" as const, hits: [hit(320)] },
+      { descentIndex: 5, line: "hot" as const, hits: [hit(290)] },
+    ];
+    const [text, ...rest] = bandNotesText(notes, "metric", "camper");
+    expect(rest).toEqual([]);
+    expect(text).toBe(
+      "Could reach fade on descents 1, 3 and 6 within the model's uncertainty: camper up to about 320 °C (its line is 260 °C). " +
+        "What would change it: carry less load, have a brake upgrade assessed by a licensed mechanic or choose another route.",
+    );
   });
 });

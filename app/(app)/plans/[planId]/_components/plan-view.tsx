@@ -17,7 +17,7 @@ import { Button } from "@/components/ui/button";
 import { Card, CardHeader } from "@/components/ui/card";
 import { Notice } from "@/components/ui/notice";
 import { adviseRig, GENERAL_CAUTIONS, shortfallText, speedLimitText, worstVerdict, type RigAdvice, type RunOutcome } from "@/lib/advice";
-import { bandNoteText } from "@/lib/advice/render";
+import { bandNotesText } from "@/lib/advice/render";
 import { gearText, peakText } from "@/lib/advice/render-parts";
 import type { PlanRigResult } from "@/lib/analysis/plan-run";
 import { changesAnything, emptyWhatIf, runWhatIf, type WhatIfResult, type WhatIfSettings } from "@/lib/analysis/what-if";
@@ -228,13 +228,13 @@ export function PlanView({
       const at = `↓${d.descentIndex + 1}`;
       if (d.shortfall !== null) return [`${who(m)}on ${at} the advice is not enough: ${shortfallText(d.shortfall, units, n)}.`];
       if (d.nothingIsEnough) return [`${who(m)}on ${at} no gear, held speed or cool-down stop keeps the brakes out of the fade range.`];
-      if (d.baseline.worstClass === "runaway") return [`${who(m)}on ${at}, as planned, the brakes may fail (runaway); follow the advice for this descent.`];
+      if (d.baseline.worstClass === "runaway") return [`${who(m)}on ${at}, the brakes may fail (runaway) if driven as planned: follow the advice for this descent.`];
       return [];
     });
   });
   const uncertainty = members.flatMap((m) => {
     const ceilings = ceilingsByPosition(m.result.analysis.positions.map((p) => ({ position: p.position, ceilingC: p.validityCeilingC })));
-    return m.result.advice.uncertainty.map((note) => `${who(m)}${bandNoteText(note, units, trailerNoun(m.rig), ceilings)}`);
+    return bandNotesText(m.result.advice.uncertainty, units, trailerNoun(m.rig), ceilings).map((text) => `${who(m)}${text}`);
   });
   const weakest = members.filter((m) => m.result.advice.verdict === verdict);
   const gears = analysis.model.overallRatios.length;
