@@ -66,11 +66,16 @@ export function adviseDescent(
   const asPlanned = runPlan(runner, {}, false);
   if (!needsAdvice(runner, asPlanned)) return null;
   const speeds = speedCandidates(runner, topSpeedMs(asPlanned, runner));
-  const gear = gearAdvice(runner);
-  const speed = speedAdvice(runner, speeds);
+  let gear = gearAdvice(runner);
+  let speed = speedAdvice(runner, speeds);
   const stop = isBelow(asPlanned.outcome, "hot") ? null : planStops(route, runner, {}, "hot", waypoints);
   const trailer = trailerAdvice(runner, asPlanned);
   const combined = combinedPlan(route, runner, gear, speed, stop, speeds, waypoints);
+  // A plan in low range: the gear and speed lines say what low range does too, so they agree with the plan.
+  if ((combined.plan.gear ?? 0) > runner.model.highRangeGears && !runner.lowRangeFirst) {
+    if (gear.gear === null) gear = gearAdvice(runner, true);
+    if (speed.speedMs === null) speed = speedAdvice(runner, speeds, true);
+  }
   const walkingPlan = gearForSpeed(runner, runner.settings.walkingPaceMs, true);
   const walkingPace = runPlan(runner, walkingPlan, combined.nothingIsEnough || runner.coarse === runner.fine).outcome;
   const { nothingIsEnough } = combined;

@@ -71,15 +71,16 @@ export function speedCandidates(runner: DescentRunner, plannedTopMs: number): nu
  * is not enough on a steep descent (runner.lowRangeFirst), the highest low-range gear that is (its held speed
  * also capped at the low-range speed cap). A driver reaches for low range only when high range will not do.
  * @param runner the descent
+ * @param lowRange whether low range may be tried when high range is not enough (default: on a steep descent)
  * @returns the advice (gear null when no gear is enough)
  * @example gearAdvice(runner).gear // 2
  */
-export function gearAdvice(runner: DescentRunner): GearAdvice {
+export function gearAdvice(runner: DescentRunner, lowRange = runner.lowRangeFirst): GearAdvice {
   const { model } = runner;
   const high = model.highRangeGears;
   let found = searchHighest(runner, high, (i) => ({ gear: i + 1 }), "warm");
   let offset = 0;
-  if (found.index < 0 && runner.lowRangeFirst) {
+  if (found.index < 0 && lowRange && model.overallRatios.length > high) {
     found = searchHighest(runner, model.overallRatios.length - high, (i) => ({ gear: high + i + 1 }), "warm");
     offset = high;
   }
@@ -101,11 +102,12 @@ export function gearAdvice(runner: DescentRunner): GearAdvice {
  * locked on an automatic). The same search gives step 2 of the combined plan.
  * @param runner the descent
  * @param speeds candidates, m/s ascending (speedCandidates)
+ * @param lowRange whether low-range gears may carry the speeds (default: on a steep descent with a low range)
  * @returns the advice (speed null when no step is enough; the outcome is then walking pace in 1st)
  * @example speedAdvice(runner, speedCandidates(runner, 55 / 3.6)).speedMs
  */
-export function speedAdvice(runner: DescentRunner, speeds: readonly number[]): SpeedAdvice {
-  const planOf = (i: number) => gearForSpeed(runner, speeds[i] as number);
+export function speedAdvice(runner: DescentRunner, speeds: readonly number[], lowRange = runner.lowRangeFirst): SpeedAdvice {
+  const planOf = (i: number) => gearForSpeed(runner, speeds[i] as number, lowRange);
   const found = searchHighest(runner, speeds.length, planOf, "warm", "scan");
   const plan = found.index >= 0 ? planOf(found.index) : planOf(0);
   const run = found.run ?? runPlan(runner, plan, false);

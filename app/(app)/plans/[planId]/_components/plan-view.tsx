@@ -251,7 +251,7 @@ export function PlanView({
     : null;
 
   return (
-    <div className="grid gap-6">
+    <div className="grid grid-cols-1 gap-6">
       <section
         data-testid="plan-verdict"
         data-verdict={verdict}
@@ -342,7 +342,7 @@ export function PlanView({
           actions={!whatIfOpen && <Button variant="secondary" onClick={() => setWhatIfOpen(true)}>Open the what-if</Button>}
         />
         {whatIfOpen && (
-          <div className="grid gap-5 p-5">
+          <div className="grid grid-cols-1 gap-5 p-5">
             <WhatIfPanel
               planId={planId}
               rig={member.rig}
