@@ -1,5 +1,5 @@
 /**
- * Issue 3 §6 benchmark: a 100,000-point GPX (≈ 9 MB) parsed and processed on the server through the upload
+ * Upload benchmark: a 100,000-point GPX (≈ 9 MB) parsed and processed on the server through the upload
  * path (processUpload: the compiled worker thread with its memory and time limits), goal ≤ 1.5 s and
  * ≤ 300 MB extra memory; gpxparser's DOM path on the same file for comparison (goal: ours ≥ 10× faster);
  * and the size of the route page's data (goal ≤ 2 MB). Prints figures, asserts nothing.

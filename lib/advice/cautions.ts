@@ -1,7 +1,7 @@
 /**
- * Cautions in our own words (after trade-facts.md §6). They go with every printed or shown piece of advice, and the
- * standstill cautions with every cool-down stop (trade-facts.md §3.2). The infrared-thermometer check is
- * common practice (trade-facts.md §5, item 5: forum answers), not a published rule.
+ * Cautions in our own words (docs/trade-facts.md §6). They go with every printed or shown piece of advice, and
+ * the standstill cautions with every cool-down stop (docs/trade-facts.md §5.1). The infrared-thermometer check
+ * is common practice, no published source (docs/trade-facts.md §5.3), not a published rule.
  */
 
 /** Cautions that go with all advice. */

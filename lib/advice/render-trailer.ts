@@ -1,4 +1,4 @@
-/** Trailer-brake notes in words (trade-facts.md §2, "Brake controllers"). */
+/** Trailer-brake notes in words (docs/trade-facts.md §2.1). */
 
 import type { UnitSystem } from "@/lib/units";
 import { at } from "./render-parts";

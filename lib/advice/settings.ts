@@ -26,7 +26,7 @@ export interface AdviceSettings {
   bandSpreads: Readonly<Record<number, number>>;
   /** Distance before the crest from which a descent is re-run (the slowing for the crest happens here), m. */
   leadInM: number;
-  /** Model step of the searches, m: the route is coarsened to about this step (thermal-model.md §1.1: ≤ 50–100 m). */
+  /** Model step of the searches, m: the route is coarsened to about this step (docs/model.md §7: 5, 20 and 100 m steps agree within 0.5 K). */
   searchStepM: number;
   /** A search result this close to its line (K) is re-run at the route's own step before it is trusted. */
   doubtK: number;

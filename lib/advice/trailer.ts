@@ -1,5 +1,5 @@
 /**
- * Trailer-brake advice on one descent (trade-facts.md §2, "Brake controllers"):
+ * Trailer-brake advice on one descent (docs/trade-facts.md §2.1):
  * - Drums that pass their fade-likely line lose grip and hand their work to the tow vehicle (fade feedback,
  *   docs/model.md): a low heat share then is the fade, not a controller to check, and the note says so.
  * - Electric and electric-over-hydraulic brakes follow the stop-light circuit, so engine braking alone does not

@@ -1,5 +1,5 @@
 /**
- * Trailer-brake rules by region (trade-facts.md §2), each with its sources and last-checked date. A rule maps
+ * Trailer-brake rules by region (docs/trade-facts.md §2.2), each with its sources and last-checked date. A rule maps
  * a trailer mass (and, where the rule says so, the towing vehicle's mass) to what it requires.
  */
 

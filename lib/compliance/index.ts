@@ -1,5 +1,5 @@
 /**
- * lib/compliance — pure mass-compliance checks of a rig (issue 4 §2). The single public import point:
+ * lib/compliance — pure mass-compliance checks of a rig (docs/trade-facts.md §1–2). The single public import point:
  * `import { checkRigCompliance } from "@/lib/compliance"`. Masses in kg.
  */
 

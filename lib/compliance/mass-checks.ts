@@ -1,5 +1,5 @@
 /**
- * Ratings against actual masses (trade-facts.md §1.1: GVM includes the tow-ball mass; GCM covers the loaded
+ * Ratings against actual masses (docs/trade-facts.md §1.1: GVM includes the tow-ball mass; GCM covers the loaded
  * vehicle plus the loaded trailer; loaded mass must not exceed any rating — state road-safety checklist [src]).
  */
 

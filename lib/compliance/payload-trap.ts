@@ -1,5 +1,5 @@
 /**
- * The "payload left at full tow" trap (trade-facts.md §1.1): a ute sold as able to tow 3,500 kg often has a GCM
+ * The "payload left at full tow" trap (docs/trade-facts.md §1.4): a ute sold as able to tow 3,500 kg often has a GCM
  * of about 5,850–6,000 kg, so at a full 3,500 kg tow only a few hundred kilograms of payload are legally left.
  * Arithmetic on the definitions: the vehicle without the ball must stay within GCM − trailer, and with the ball
  * within GVM.

@@ -1,18 +1,18 @@
 /**
- * Sources and dates of the compliance rules, as recorded in the project's research notes (trade-facts.md §1–2).
- * No rule here has been checked against the regulator's own text since those notes: each says so.
+ * Sources and dates of the compliance rules, as listed in docs/trade-facts.md §1–2.
+ * No rule here has been checked against the regulator's own text since they were gathered: each says so.
  */
 
 import type { RuleSource } from "./types";
 
-/** Date of the research notes the rules were taken from (ISO 8601). */
+/** Date the rules were gathered and last checked (ISO 8601). */
 export const RULES_LAST_CHECKED = "2026-12-01";
 
 /** What the rules were checked against. */
 export const RULES_CHECKED_AGAINST =
   "secondary sources gathered for Fadeline (industry guides, motoring clubs, quoted regulations); verify with the regulator before relying on a rule";
 
-/** Sources of the mass terms (trade-facts.md §1.1) and of the owner's checklist. */
+/** Sources of the mass terms (docs/trade-facts.md §1.1) and of the owner's checklist. */
 export const MASS_TERM_SOURCES: RuleSource[] = [
   {
     title: "ADR definitions (GVM, GCM, ATM, GTM), Vehicle Standard (ADR – Definitions and Vehicle Categories) 2005",

@@ -1,5 +1,5 @@
 /**
- * Whether a trailer's brakes meet the rule for its mass in a region (trade-facts.md §2). Conservative on the
+ * Whether a trailer's brakes meet the rule for its mass in a region (docs/trade-facts.md §2.2). Conservative on the
  * mass: the plated rating or the loaded mass, whichever is higher (NZ: the laden weight).
  */
 

@@ -5,7 +5,7 @@
 
 import type { RigMasses } from "@/lib/thermal";
 
-/** Regions with a trailer-brake rule on file (trade-facts.md §2). */
+/** Regions with a trailer-brake rule on file (docs/trade-facts.md §2.2). */
 export type Region = "AU" | "NZ" | "UK" | "EU" | "US-TX" | "US-CA" | "CA-BC" | "CA-AB";
 
 /** Outcome of one mass check. */
@@ -29,11 +29,11 @@ export interface MassCheck {
   note: string | null;
 }
 
-/** Where a rule or fact comes from (tags as in trade-facts.md). */
+/** Where a rule or fact comes from (tags as in docs/trade-facts.md, "How sources are named"). */
 export interface RuleSource {
   /** What the source is, in plain words. */
   title: string;
-  /** Where to read it, when the research notes give an address. */
+  /** Where to read it, when the source has one. */
   url: string | null;
   /** [src] official; [2nd] secondary; [from memory]. */
   tag: "src" | "2nd" | "from memory";

@@ -19,7 +19,7 @@ export interface DedupedSegment {
 /**
  * Merges consecutive points that are closer than `toleranceM` (a device logging while stopped, or the
  * same coordinates written twice), so that no step has zero length and no slope divides by zero
- * (security.md §C21). A merged point keeps the first elevation found among its duplicates.
+ * (docs/security.md C21). A merged point keeps the first elevation found among its duplicates.
  *
  * @param points the segment's points in order
  * @param toleranceM points closer than this are duplicates, m

@@ -1,6 +1,6 @@
 /**
  * Hardening limits for {@link parseGpx}. They bound the work and memory any input can cause, so that
- * hostile files (security.md §C6–C10: deep nesting, attribute floods, huge text nodes, point floods) are
+ * hostile files (docs/security.md C6–C10: deep nesting, attribute floods, huge text nodes, point floods) are
  * refused quickly with a specific message. Real GPX files stay far below every one of them.
  */
 export interface GpxLimits {

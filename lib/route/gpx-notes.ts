@@ -8,7 +8,7 @@ import { type PendingPoint, pointLabel, pointWhere } from "./read-point";
 export type RootCheck = { version: "1.0" | "1.1" | null; warning?: RouteProblem } | { problem: RouteProblem };
 
 /**
- * Checks the root element: its local name must be `gpx` (security.md §C13: HTML, KML and other XML are
+ * Checks the root element: its local name must be `gpx` (docs/security.md C13: HTML, KML and other XML are
  * refused), in the GPX 1.0 or 1.1 namespace. A `gpx` root with no namespace at all is accepted and read
  * as GPX 1.1, with a warning: such files come from old or hand-written tools and are otherwise
  * unambiguous. Any other namespace is refused.

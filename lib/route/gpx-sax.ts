@@ -22,7 +22,7 @@ const CHUNK_CHARS = 65_536;
 
 /**
  * Runs saxes 6 (a streaming, DOM-free XML 1.0 parser with namespace support) over `text` with the
- * hardening Fadeline needs (security.md §C): any DOCTYPE is refused the moment it is seen, so no entity
+ * hardening Fadeline needs (docs/security.md §C): any DOCTYPE is refused the moment it is seen, so no entity
  * is ever declared or expanded (XXE, billion laughs, quadratic blow-up: C1–C5); attribute counts are
  * capped while the tag is still being read (C7) and nesting depth as soon as a tag is complete, before any
  * of its content is read (C6); the prolog is capped. Any

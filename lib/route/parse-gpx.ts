@@ -28,7 +28,7 @@ export type ParseGpxResult =
 
 /**
  * Parses GPX 1.0 or 1.1 text with a streaming, DOM-free XML parser, hardened for untrusted uploads
- * (security.md §C): any DOCTYPE is refused (so no entity is ever declared, expanded or fetched), nesting,
+ * (docs/security.md §C): any DOCTYPE is refused (so no entity is ever declared, expanded or fetched), nesting,
  * attributes, text lengths and point counts are capped, malformed XML is an error rather than an empty
  * result, and the root must be `gpx` (GPX 1.0 / 1.1 namespace, or none: read as 1.1 with a warning).
  * Coordinates and elevations are strict xsd:decimal values in range; every bad value is reported with

@@ -8,7 +8,7 @@ export type SelectTrackResult = { ok: true; track: GpxTrack } | { ok: false; pro
  * Picks the track or route to model. With an `id` (from {@link listTracks}) that one is returned. Without
  * one, the default is the first track with at least two points, else the first such route, else the first
  * track or route at all (cleaning then explains what is wrong with it). A file with only waypoints is
- * refused with a message saying so (security.md §C24).
+ * refused with a message saying so (docs/security.md C24).
  *
  * @param gpx a document from {@link parseGpx}
  * @param id "track:N" or "route:N", optional

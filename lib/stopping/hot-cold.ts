@@ -1,5 +1,5 @@
 /**
- * Hot versus cold stopping distance at the bottom of a descent (issue 5 §7): from 80 km/h and from 50 mph, with
+ * Hot versus cold stopping distance at the bottom of a descent (checked in docs/validation.md §5): from 80 km/h and from 50 mph, with
  * the brakes at their predicted temperature beside the same rig with cold brakes (ambient). ESTIMATE.
  */
 

@@ -1,5 +1,5 @@
 /**
- * lib/stopping: stopping distance with hot brakes versus cold (issue 5 §7). Pure and isomorphic, SI inside
+ * lib/stopping: stopping distance with hot brakes versus cold (checked in docs/validation.md §5). Pure and isomorphic, SI inside
  * (m, s, kg, m/s; temperatures in °C). Every figure is an ESTIMATE: the fade curve is our own, and the pedal-
  * limited model is calibrated on check values from practice (common practice, no published source).
  */

@@ -7,7 +7,7 @@ import {
 
 /**
  * Air density of the International Standard Atmosphere troposphere:
- * ρ = 1.225·(1 − 2.25577e-5·h)^4.2559 [M] ISO 2533; thermal-model.md §1.2. Altitudes above 11 km are held at
+ * ρ = 1.225·(1 − 2.25577e-5·h)^4.2559 [M] ISO 2533; docs/model.md §3. Altitudes above 11 km are held at
  * the tropopause value.
  * @param altitudeM geometric altitude above mean sea level, m
  * @returns air density, kg/m³

@@ -1,6 +1,6 @@
 /**
- * Cooling of one brake: lumped convection rising with speed plus radiation (thermal-model.md §1.4), and the
- * specific heat of cast iron, optionally temperature-dependent (§2).
+ * Cooling of one brake: lumped convection rising with speed plus radiation (docs/model.md §6.1–6.2), and the
+ * specific heat of cast iron, optionally temperature-dependent (docs/model.md §6.4).
  */
 
 import {
@@ -17,7 +17,7 @@ import {
 import type { BrakeKind } from "./rig";
 
 /**
- * Convective conductance of one brake hA(v) = hA_0 + a·v^0.8 [E] thermal-model.md §1.4.
+ * Convective conductance of one brake hA(v) = hA_0 + a·v^0.8 [E] docs/model.md §6.1.
  * @param standstillWK hA_0, the conductance at standstill, W/K
  * @param slopeWK a, W/K per (m/s)^0.8
  * @param speedMs road speed, m/s
@@ -30,7 +30,7 @@ export function convectiveConductance(standstillWK: number, slopeWK: number, spe
 
 /**
  * Linearised radiation coefficient h_rad = ε·σ·(T² + Ta²)·(T + Ta), T in kelvin, so that the radiated flux is
- * h_rad·(T − Ta) exactly (thermal-model.md §1.4; check case C9).
+ * h_rad·(T − Ta) exactly (docs/model.md §6.2; check case C9).
  * @param emissivity surface emissivity (dimensionless, 0–1)
  * @param tempC surface temperature, °C
  * @param ambientC ambient temperature, °C
@@ -45,7 +45,7 @@ export function radiationCoefficient(emissivity: number, tempC: number, ambientC
 
 /**
  * Specific heat of cast iron: constant, or c(T) = c20 + slope·(T − 20) held constant above 600 °C
- * ([M] fit, thermal-model.md §2). A constant c overestimates high temperatures, which is conservative.
+ * ([M] fit, docs/model.md §6.4). A constant c overestimates high temperatures, which is conservative.
  * @param tempC temperature, °C
  * @param c20 specific heat at 20 °C, J/(kg·K)
  * @param slope rise of c per kelvin, J/(kg·K²); 0 for a constant c
@@ -60,7 +60,7 @@ export function specificHeat(tempC: number, c20: number, slope: number): number 
 
 /**
  * Scale of the reference (vented, 330 mm) convection coefficients for a brake: the kind factor (vented 1,
- * solid 0.6, drum 0.5 [E] §1.4) times the area ratio (D / 0.33 m)² [E].
+ * solid 0.6, drum 0.5 [E] docs/model.md §6.1) times the area ratio (D / 0.33 m)² [E].
  * @param kind brake hardware
  * @param diameterM outer diameter, m
  * @returns conductance scale (dimensionless)

@@ -1,5 +1,5 @@
 /**
- * Engine braking from the motoring-friction model (thermal-model.md §2): P_mot = FMEP·V_d·n/120 for a
+ * Engine braking from the motoring-friction model (docs/model.md §3): P_mot = FMEP·V_d·n/120 for a
  * four-stroke engine [M] *Internal Combustion Engine Fundamentals* (1988) ch. 13; rpm = v·i_gear·i_final·60/(2π·r_dyn).
  */
 
@@ -8,7 +8,7 @@ export const DYNAMIC_RADIUS_FACTOR = 0.97;
 
 /**
  * Motoring friction mean effective pressure of a light turbodiesel, Pa: a quadratic through the [E] values
- * of thermal-model.md §2 (1.5 bar at 2,000, 2.0 bar at 3,000, 2.6 bar at 4,000 rpm):
+ * of docs/model.md §3 (1.5 bar at 2,000, 2.0 bar at 3,000, 2.6 bar at 4,000 rpm):
  * FMEP = 0.8 + 0.25·(n/1000) + 0.05·(n/1000)² bar.
  * @param rpm engine speed, rev/min
  * @returns FMEP, Pa

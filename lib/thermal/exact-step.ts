@@ -1,6 +1,6 @@
 /**
  * The exact step of the lumped rotor ODE m·c·dT/dt = q − hA·(T − Ta) for constant q and hA over the step
- * (thermal-model.md §1.5, check case C8):
+ * (docs/model.md §7, check case C8 in docs/validation.md):
  *   T(t+Δt) = T + (q − hA·(T − Ta))·(1 − e^(−hA·Δt/(m·c)))/hA,
  * which equals T_ss + (T − T_ss)·e^(−Δt/τ) with T_ss = Ta + q/hA, τ = m·c/hA, and tends to T + q·Δt/(m·c)
  * as hA → 0. Written with expm1 so both limits are exact in floating point.
@@ -31,7 +31,7 @@ export function exactStepC(
 }
 
 /**
- * Time for a body heated by a constant q to go from T0 to a limit (thermal-model.md §1.5):
+ * Time for a body heated by a constant q to go from T0 to a limit (docs/model.md §7):
  * t = −τ·ln(1 − (T_lim − T0)/(T_ss − T0)); Infinity when the steady state T_ss = Ta + q/hA does not pass T_lim.
  * @param startC starting temperature, °C
  * @param limitC limit temperature, °C (above startC)

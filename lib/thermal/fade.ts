@@ -39,7 +39,7 @@ export interface FadeCurve extends FadeShape {
 /**
  * Shapes per friction family [E], our own estimates: every family loses about a tenth of its grip between
  * the warm and the hot line; organic/NAO pads and drum linings fall furthest and fastest beyond it (drums also
- * expand away from their shoes, trade-facts.md §3.3), semi-metallic pads least.
+ * expand away from their shoes, docs/trade-facts.md §4.3), semi-metallic pads least.
  */
 export const FADE_SHAPES: Readonly<Record<PadFamily, FadeShape>> = {
   organic: { ratioAtHot: 0.9, floorRatio: 0.5, floorSpanK: 200 },

@@ -1,6 +1,6 @@
 /**
  * Brake-fluid temperature proxy — UNVALIDATED, advisory only. No published transfer function from rotor to
- * fluid temperature was found (thermal-model.md §1.6). Proposal [E]:
+ * fluid temperature was found (docs/model.md §8). Proposal [E]:
  *   dT_f/dt = (Ta + k_f·(T_rotor − Ta) − T_f)/τ_f, k_f ≈ 0.3–0.5, τ_f ≈ 5–15 min,
  * stepped exactly for a constant rotor temperature over the step. The lag keeps T_f rising for a while after
  * a stop (heat soak).

@@ -1,5 +1,5 @@
 /**
- * Heat runs: the brake temperature of each brake position of a rig along a route (thermal-model.md §1), for one
+ * Heat runs: the brake temperature of each brake position of a rig along a route (docs/model.md §2–8), for one
  * rig or a convoy sharing one route.
  */
 

@@ -1,5 +1,5 @@
 /**
- * lib/thermal — the pure, isomorphic brake-heat model of Fadeline (thermal-model.md §1). The single public import
+ * lib/thermal — the pure, isomorphic brake-heat model of Fadeline (docs/model.md). The single public import
  * point: `import { runHeatRun } from "@/lib/thermal"`. SI inside; temperatures in °C (names ending in C).
  */
 

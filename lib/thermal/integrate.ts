@@ -1,6 +1,6 @@
 /**
- * The heat-run hot loop: per step, the energy balance of thermal-model.md §1.2, the split of §1.3, and the
- * exact temperature step of §1.5 at every brake position. Tight loop over typed arrays, no allocation per step.
+ * The heat-run hot loop: per step, the energy balance of docs/model.md §3, the split of §5, and the
+ * exact temperature step of §7 at every brake position. Tight loop over typed arrays, no allocation per step.
  */
 
 import { CELSIUS_TO_KELVIN, CONVECTION_SPEED_EXPONENT, STANDARD_GRAVITY, STEFAN_BOLTZMANN } from "./constants";

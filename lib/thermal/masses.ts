@@ -1,5 +1,5 @@
 /**
- * Actual masses of a rig from its empty masses and load (trade-facts.md §1.1: GVM includes the tow-ball mass;
+ * Actual masses of a rig from its empty masses and load (docs/trade-facts.md §1.1, §1.3: GVM includes the tow-ball mass;
  * GCM covers the vehicle plus the trailer's axle loads; TBM ≈ ATM − GTM in practice).
  */
 
@@ -31,7 +31,7 @@ export interface RigMasses {
 
 /**
  * Actual masses of the rig. A running-order empty mass already includes a 75 kg driver [M, Reg (EU) 1230/2012],
- * so that much is taken back off the occupants; a tare mass holds only 10 L of fuel (trade-facts.md §1.1).
+ * so that much is taken back off the occupants; a tare mass holds only 10 L of fuel (docs/trade-facts.md §1.2).
  * Without a weighed tow-ball mass, 10 % of the trailer's mass is assumed (common practice, no published source).
  * @param rig the rig
  * @returns masses in kg with notes

@@ -1,6 +1,6 @@
 /**
  * Model parameters: every one can be overridden per heat run, and set to zero where the physics allows
- * (issue 4 §3). Defaults are tagged as in thermal-model.md §0.
+ * (docs/model.md §13.1). Defaults are tagged as in docs/model.md (the provenance tags at its top).
  */
 
 import type { PadFamily } from "./rig";
@@ -33,7 +33,7 @@ export interface ModelParams {
   ambientC: number;
   /** Brake temperature at the start, °C; null = ambient. */
   startTempC: number | null;
-  /** Multiplier on the convective conductance (hA_0 and a), dimensionless ≥ 0. Default 1 [E] (§6: ±50 %). */
+  /** Multiplier on the convective conductance (hA_0 and a), dimensionless ≥ 0. Default 1 [E] (docs/model.md §6.1: ±50 %). */
   coolingFactor: number;
   /** Front share of the tow vehicle's service-brake work φ_f (0–1); null = the vehicle's, else 0.65 [E]. */
   frontShare: number | null;
@@ -64,7 +64,7 @@ export interface ModelParams {
    * [M] UN R13 Annex 4 minimum service braking of semi-trailers (45 % of the load on the wheels).
    */
   trailerBrakeCapacityMs2: number;
-  /** Share of the friction heat entering the rotor or drum γ (0–1). Default 0.9 [M] *Brake Design and Safety* (SAE, 1999) ch. 3 (§1.3). */
+  /** Share of the friction heat entering the rotor or drum γ (0–1). Default 0.9 [M] *Brake Design and Safety* (SAE, 1999) ch. 3 (docs/model.md §5.5). */
   rotorPartition: number;
   /** Drag area of the whole combination, m²; null = vehicle CdA + trailer added CdA. */
   cdaM2: number | null;
@@ -74,7 +74,7 @@ export interface ModelParams {
   engineBrakingScale: number;
   /** Fixed engine retarding power at the wheels when moving, W; null = the motoring model. */
   engineBrakingPowerW: number | null;
-  /** Motoring-power multiplier with an exhaust brake. Default 1.5 [E] (§2: adds ≈ 50–100 %). */
+  /** Motoring-power multiplier with an exhaust brake. Default 1.5 [E] (docs/model.md §3: adds ≈ 50–100 %). */
   exhaustBrakeFactor: number;
   /** Engine-braking multiplier of an automatic with the converter unlocked. Default 0.35 [E]. */
   converterUnlockedFactor: number;
@@ -82,13 +82,13 @@ export interface ModelParams {
   drivelineEfficiency: number;
   /** Rotating-inertia factor δ, m_eff = m·(1 + δ). Default 0.04 [M] vehicle-dynamics textbooks (0.03–0.05). */
   rotatingMassFactor: number;
-  /** Emissivity of the brake surfaces (0–1). Default 0.55 [M] §1.4. */
+  /** Emissivity of the brake surfaces (0–1). Default 0.55 [M] docs/model.md §6.2. */
   emissivity: number;
-  /** Wheel-and-arch enclosure factor on standstill cooling (0–1). Default 0.85 [E] §1.4 (0.7–1.0). */
+  /** Wheel-and-arch enclosure factor on standstill cooling (0–1). Default 0.85 [E] docs/model.md §6.3 (0.7–1.0). */
   standstillFactor: number;
-  /** Specific heat of the rotors and drums at 20 °C, J/(kg·K). Default 460 [M] §2. */
+  /** Specific heat of the rotors and drums at 20 °C, J/(kg·K). Default 460 [M] docs/model.md §6.4. */
   specificHeat: number;
-  /** Rise of the specific heat per K, J/(kg·K²), used when {@link variableSpecificHeat}. Default 0.4 [M] §2. */
+  /** Rise of the specific heat per K, J/(kg·K²), used when {@link variableSpecificHeat}. Default 0.4 [M] docs/model.md §6.4. */
   specificHeatSlope: number;
   /** Use c(T) instead of a constant c (a constant c is conservative). Default false. */
   variableSpecificHeat: boolean;
@@ -100,7 +100,7 @@ export interface ModelParams {
   accelMs2: number;
   /** The driver's cruise cap, m/s. Default 90 km/h [E]. */
   cruiseSpeedMs: number;
-  /** Towing speed limit, m/s (only with a trailer). Default 100 km/h [src-ish] trade-facts.md §3.6 (WA, NSW > 4.5 t). */
+  /** Towing speed limit, m/s (only with a trailer). Default 100 km/h [src-ish] docs/trade-facts.md §4.1 (WA, NSW > 4.5 t). */
   towingSpeedLimitMs: number;
   /** Descent speed policy, tiers in any order. Default 4 % → 70, 7 % → 55, 10 % → 45 km/h [E]. */
   descentSpeeds: readonly DescentSpeedTier[];
@@ -113,11 +113,11 @@ export interface ModelParams {
   gearPolicy: GearPolicy;
   /** Descent rpm limit, rev/min; null = by fuel (diesel 3,800, petrol 4,500 [E]) unless the engine gives one. */
   maxRpm: number | null;
-  /** Fluid-proxy gain k_f (0–1). Default 0.4 [E] §1.6 (0.3–0.5). Unvalidated. */
+  /** Fluid-proxy gain k_f (0–1). Default 0.4 [E] docs/model.md §8 (0.3–0.5). Unvalidated. */
   fluidGain: number;
-  /** Fluid-proxy time constant τ_f, s. Default 600 [E] §1.6 (5–15 min). Unvalidated. */
+  /** Fluid-proxy time constant τ_f, s. Default 600 [E] docs/model.md §8 (5–15 min). Unvalidated. */
   fluidTimeConstantS: number;
-  /** Water uptake of glycol fluids, %/year. Default 2 [2nd] trade-facts.md §3.3. */
+  /** Water uptake of glycol fluids, %/year. Default 2 [2nd] docs/trade-facts.md §3.2. */
   waterUptakePctPerYear: number;
   /** Warm/hot thresholds per friction family, °C (estimates). */
   padThresholds: Readonly<Record<PadFamily, PadThresholds>>;
@@ -132,13 +132,13 @@ export type ModelParamsInput = Partial<Omit<ModelParams, "padThresholds">> & {
   padThresholds?: Partial<Record<PadFamily, PadThresholds>>;
 };
 
-/** Default front share of the service-brake work φ_f. [E] thermal-model.md §1.3 (0.55–0.75). */
+/** Default front share of the service-brake work φ_f. [E] docs/model.md §5.2 (0.55–0.75). */
 export const DEFAULT_FRONT_SHARE = 0.65;
 
-/** Default controller gain by trailer brake type. [E] thermal-model.md §1.3 (override 0.5–1, uncertain). */
+/** Default controller gain by trailer brake type. [E] docs/model.md §13.1 (override 0.5–1, uncertain). */
 export const DEFAULT_TRAILER_GAIN = { none: 0, override: 0.75, electric: 1, "electric-over-hydraulic": 1 } as const;
 
-/** Default descent rpm limit by fuel, rev/min. [E] thermal-model.md §2 ("3,500–4,000 rpm") for diesels. */
+/** Default descent rpm limit by fuel, rev/min. [E] docs/model.md §13.1 ("3,500–4,000") for diesels. */
 export const DEFAULT_MAX_RPM = { diesel: 3800, petrol: 4500 } as const;
 
 /** Default idle speed, rev/min. [E] */

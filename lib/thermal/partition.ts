@@ -1,6 +1,6 @@
 /**
  * How the braking work is shared: trailer versus tow vehicle by brake type and controller gain, front versus
- * rear, and rotor versus pad (thermal-model.md §1.3; trade-facts.md §2 "Brake controllers").
+ * rear, and rotor versus pad (docs/model.md §5; docs/trade-facts.md §2.1, brake controllers).
  */
 
 import type { TrailerBrakeType } from "./rig";
@@ -17,7 +17,7 @@ export interface MaterialProperties {
 
 /**
  * Share of the friction heat that enters the rotor, γ = 1/(1 + √((ρck)_pad/(ρck)_rotor))
- * [M] *Brake Design and Safety* (SAE, 1999), ch. 3; thermal-model.md §1.3, check case C10.
+ * [M] *Brake Design and Safety* (SAE, 1999), ch. 3; docs/model.md §5.5, check case C10.
  * @param rotor rotor material
  * @param pad pad material
  * @returns rotor share of the heat (dimensionless, 0–1)
@@ -53,12 +53,12 @@ const OVERRIDE_MAX_COLD_SHARE = 0.98;
  * the split; the driver keeps the retarding force the speed needs, so energy is conserved and only the split
  * moves. Cold (every r = 1), this is the fixed split of model 1:
  *
- * - Override (surge) brakes act whenever the trailer pushes, including under engine braking (trade-facts.md §2),
+ * - Override (surge) brakes act whenever the trailer pushes, including under engine braking (docs/trade-facts.md §2.1),
  *   so they take a share of all the retarding work first: the trailer's mass share × gain × r_t·(1 + G)/(1 + G·r_t)
  *   (G from overrideCouplingGain; cold, exactly gain × mass share). A fading override brake pushes harder on
  *   the coupling and so partly compensates itself.
  * - Electric and electric-over-hydraulic brakes follow the stop-light circuit: engine braking alone does not
- *   apply them (trade-facts.md §2). The engine takes what it can first; the controller commands gain × mass
+ *   apply them (docs/trade-facts.md §2.1). The engine takes what it can first; the controller commands gain × mass
  *   share of the service-brake remainder ([E] P_trailer = P_b·k_c·m_trailer/m_total) and the drums deliver r_t
  *   of it; the tow vehicle takes the rest.
  * - The tow vehicle's service-brake work is split front/rear by the installed front share φ_f weighted by

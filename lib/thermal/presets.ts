@@ -1,6 +1,6 @@
 /**
  * Generic presets of our own: typical values, not a particular product. Values are picked inside the ranges
- * of thermal-model.md §2 and trade-facts.md §1.1 and tagged [E] (engineering estimate). Users should replace them
+ * of docs/model.md §13 and docs/trade-facts.md §1 and tagged [E] (engineering estimate). Users should replace them
  * with their own plate and weighbridge figures.
  */
 
@@ -38,7 +38,7 @@ export const MID_SIZE_UTE: TowVehicle = {
   emptyMassKg: 2150,
   emptyMassDefinition: "kerb",
   gvmKg: 3150,
-  gcmKg: 5950, // "about 5,850–6,000 kg" for a 3,500 kg-rated dual-cab [2nd] trade-facts.md §1.1
+  gcmKg: 5950, // "about 5,850–6,000 kg" for a 3,500 kg-rated dual-cab [2nd] docs/trade-facts.md §1.4
   frontAxleRatingKg: 1350,
   rearAxleRatingKg: 1900,
   towingCapacityKg: 3500,
@@ -47,7 +47,7 @@ export const MID_SIZE_UTE: TowVehicle = {
   rearBrakes: { kind: "drum", diameterM: 0.295, massKg: 8 }, // Ø 295 mm, 6–10 kg [E/M]
   padFamily: "organic",
   brakeFluid: { fluidClass: "DOT 4", yearsSinceChange: 2 },
-  tyreDiameterM: 0.78, // light-truck tyre, thermal-model.md §1.4
+  tyreDiameterM: 0.78, // light-truck tyre, docs/model.md §6.1
   engine: { displacementM3: 0.0028, fuel: "diesel", brakeMode: "motoring" },
   // Part-time 4WD transfer case: low range about 2.5–2.7:1 is common (from memory) [E].
   transmission: { preset: "generic-6-speed-automatic", lowRangeRatio: 2.48 },
@@ -103,7 +103,7 @@ export const TANDEM_AXLE_CARAVAN: Trailer = {
   brakes: { kind: "drum", diameterM: 0.305, massKg: 8 }, // 12 in electric drums, 5–9 kg [E/M]
   controllerGain: 1,
   breakaway: "electric",
-  addedCdaM2: 1.15, // ute + caravan CdA 2.0–3.5 m², default 2.5 [E] thermal-model.md §2
+  addedCdaM2: 1.15, // ute + caravan CdA 2.0–3.5 m², default 2.5 [E] docs/model.md §13.1
 };
 
 /** A typical touring load for the ute and caravan: two adults, accessories, water and gear. [E] */

@@ -4,7 +4,7 @@
  * and the brake-heat model share; the app's zod layer validates user input into them.
  */
 
-/** Which definition the vehicle's empty mass follows (trade-facts.md §1.1, §1.5). */
+/** Which definition the vehicle's empty mass follows (docs/trade-facts.md §1.2). */
 export type EmptyMassDefinition =
   /** AU tare: all fluids, 10 L of fuel, no occupants or load. */
   | "tare"
@@ -16,7 +16,7 @@ export type EmptyMassDefinition =
 /** Brake hardware at one wheel position. */
 export type BrakeKind = "vented-disc" | "solid-disc" | "drum";
 
-/** Friction-material family; selects the warm/hot thresholds (estimates, thermal-model.md §3.1). */
+/** Friction-material family; selects the warm/hot thresholds (estimates, docs/model.md §9.1). */
 export type PadFamily = "organic" | "ceramic" | "semi-metallic" | "drum-lining";
 
 /** Brake-fluid class (FMVSS No. 116 grades). */
@@ -84,7 +84,7 @@ export interface Transmission {
   finalDrive: number;
   /**
    * Automatic only: true when the driver holds a gear in manual mode with the converter locked. An automatic
-   * with the converter unlocked retards far less (thermal-model.md §2). Default false.
+   * with the converter unlocked retards far less (docs/model.md §3). Default false.
    */
   converterLocked?: boolean;
   /**

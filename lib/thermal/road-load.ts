@@ -1,6 +1,6 @@
 /**
  * Road-load forces on the whole combination (textbook forms: *Fundamentals of Vehicle Dynamics* (SAE, 1992),
- * ch. 4 [M]; thermal-model.md §1.2). `grade` is rise over horizontal run (negative downhill), so
+ * ch. 4 [M]; docs/model.md §3). `grade` is rise over horizontal run (negative downhill), so
  * sin θ = grade/√(1 + grade²) and cos θ = 1/√(1 + grade²).
  */
 

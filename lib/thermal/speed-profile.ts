@@ -6,7 +6,7 @@
  * (range-controls.ts), and 0 at a cool-down stop; then
  * a forward pass (acceleration limit) and a backward pass (deceleration limit), v² changing by at most 2·a·Δs per
  * step. On constant-speed stretches there is no kinetic term, as in the FHWA grade severity rating system's
- * constant descent speed (thermal-model.md §1.2).
+ * constant descent speed (docs/model.md §4).
  */
 
 import { STANDARD_GRAVITY } from "./constants";

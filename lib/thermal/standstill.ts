@@ -1,6 +1,6 @@
 /**
  * Cooling at standstill, for cool-down stops: standstill convection hA_0 plus radiation, times the wheel-and-arch
- * enclosure factor (thermal-model.md §1.4; check case C11). With the exact linearisation of radiation the total
+ * enclosure factor (docs/model.md §6.3; check case C11). With the exact linearisation of radiation the total
  * loss is G(T)·(T − Ta), G(T) = f·(hA_0 + A_rad·h_rad(T)), h_rad = ε·σ·(T² + Ta²)(T + Ta) in kelvin, so the time
  * to cool is t = ∫ τ(T) d ln(T − Ta) with τ = m·c(T)/G(T); for convection only, t = τ·ln((T0 − Ta)/(T1 − Ta)).
  */
@@ -89,7 +89,7 @@ export function timeToCoolAtStandstillS(
 
 /**
  * Cool a whole rig's state at standstill for a duration. The fluid proxy keeps following the rotors, so it can
- * still rise for a while after stopping (heat soak; unvalidated, thermal-model.md §1.6).
+ * still rise for a while after stopping (heat soak; unvalidated, docs/model.md §8).
  * @param state state at the start of the stop
  * @param positions the rig's brake positions (from a heat-run result)
  * @param ambientC ambient temperature, °C

@@ -1,7 +1,7 @@
 /**
  * Temperature thresholds and step classes. Friction-material thresholds are ESTIMATES: no standard defines
- * "fade onset" (thermal-model.md §3.1; trade-facts.md §3.3). Brake-fluid boiling points are the FMVSS No. 116
- * minimums (49 CFR 571.116 S5.1.1 dry, S5.1.2 wet; thermal-model.md §3.2).
+ * "fade onset" (docs/model.md §9.1; docs/trade-facts.md §4.3). Brake-fluid boiling points are the FMVSS No. 116
+ * minimums (49 CFR 571.116 S5.1.1 dry, S5.1.2 wet; docs/model.md §8; docs/trade-facts.md §3.1).
  */
 
 import type { FluidClass, PadFamily } from "./rig";
@@ -24,7 +24,7 @@ export interface PadThresholds {
 export const PAD_THRESHOLD_LABEL = "estimate: no standard defines fade onset; set your own";
 
 /**
- * Default thresholds per friction family [E/M], thermal-model.md §3.1: organic/NAO fine to ≈ 250 °C, fade from
+ * Default thresholds per friction family [E/M], docs/model.md §9.1: organic/NAO fine to ≈ 250 °C, fade from
  * ≈ 300–350 °C; OE ceramic-type fade likely from ≈ 350 °C; semi-metallic usable to ≈ 450–550 °C; drum linings
  * use the 260 °C (500 °F) bulk-drum limit of the FHWA grade severity rating system [M] as "hot".
  */
@@ -37,17 +37,17 @@ export const DEFAULT_PAD_THRESHOLDS: Readonly<Record<PadFamily, PadThresholds>> 
 
 /** Minimum equilibrium reflux boiling points, dry and wet, °C. FMVSS No. 116 (49 CFR 571.116) S5.1.1, S5.1.2. */
 export const FMVSS_116_BOILING_POINTS: Readonly<Record<FluidClass, { dryC: number; wetC: number }>> = {
-  "DOT 3": { dryC: 205, wetC: 140 }, // [S] thermal-model.md §3.2; trade-facts.md §3.3
+  "DOT 3": { dryC: 205, wetC: 140 }, // [S] docs/model.md §8; docs/trade-facts.md §3.1
   "DOT 4": { dryC: 230, wetC: 155 }, // [S] same
-  "DOT 5.1": { dryC: 260, wetC: 180 }, // [M] same limits as DOT 5 (thermal-model.md §3.2)
-  "DOT 5": { dryC: 260, wetC: 180 }, // [S] thermal-model.md §3.2
+  "DOT 5.1": { dryC: 260, wetC: 180 }, // [M] same limits as DOT 5 (docs/model.md §8)
+  "DOT 5": { dryC: 260, wetC: 180 }, // [S] docs/model.md §8
 };
 
-/** Water content of the FMVSS No. 116 "wet" test fluid, % by weight. [S] thermal-model.md §3.2 (3.70 ± 0.05 %). */
+/** Water content of the FMVSS No. 116 "wet" test fluid, % by weight. [S] docs/model.md §8 (3.70 ± 0.05 %). */
 export const WET_TEST_WATER_PCT = 3.7;
 
 /**
- * Water uptake of a glycol fluid, % by weight per year: "about 2 % in 12 months" [2nd] trade-facts.md §3.3.
+ * Water uptake of a glycol fluid, % by weight per year: "about 2 % in 12 months" [2nd] docs/trade-facts.md §3.2.
  * Common practice; the vehicle's schedule takes precedence.
  */
 export const DEFAULT_WATER_UPTAKE_PCT_PER_YEAR = 2;

@@ -1,5 +1,5 @@
 /**
- * Benchmarks of lib/advice (issue 5): figures only, never asserted.
+ * Benchmarks of lib/advice: figures only, never asserted.
  * (a) a 12-rig convoy advised on a synthetic 300 km mountain route at 10 m steps (30,001 samples, six long
  *     descents), advice, proofs and verdict included: goal ≤ 300 ms (server).
  * (c) the same convoy as the plan page computes it: heat runs, advice and the uncertainty bands (with the

@@ -1,7 +1,7 @@
 /**
  * lib/route benchmarks (vitest bench): the hot path resample + smooth + grade/curve + descents + stats on
  * a synthetic 300 km route, each stage alone, and parsing / processing a 100,000-point GPX file (≈ 7 MB,
- * the size issue 3 §6 budgets for) through to the browser's view, as the upload worker does. Synthetic data only: an invented winding mountain road with seeded
+ * the size the upload benchmark budgets for) through to the browser's view, as the upload worker does. Synthetic data only: an invented winding mountain road with seeded
  * GPS-like noise. Run: npx vitest bench --run tests/bench/route.bench.ts
  */
 import { bench, describe } from "vitest";

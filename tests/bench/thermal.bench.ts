@@ -1,5 +1,5 @@
 /**
- * Benchmarks of lib/thermal (issue 4 §6): one rig over a 300 km route at 10 m steps (30,000 samples), and a
+ * Benchmarks of lib/thermal: one rig over a 300 km route at 10 m steps (30,000 samples), and a
  * 12-rig convoy on the same route. Figures only, never asserted. Targets: 1 rig ≤ 16 ms (browser what-if),
  * 12 rigs ≤ 200 ms (server). Run: `npx vitest bench --run tests/bench/thermal.bench.ts`.
  */

@@ -1,5 +1,5 @@
 /**
- * What happens when PostgreSQL misbehaves (security.md section E): an idle connection killed by the server
+ * What happens when PostgreSQL misbehaves (docs/security.md §E): an idle connection killed by the server
  * does not crash the process and the next query succeeds (node-postgres Pool docs: an idle client's error is
  * emitted on the pool); an unreachable database answers 503 with a generic message, fast.
  */

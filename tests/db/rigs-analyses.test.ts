@@ -1,6 +1,6 @@
 /**
  * Rigs and analyses through the data-access layer, PostgreSQL and the heat worker. Compliance figures are
- * checked against the rules in trade-facts.md through lib/compliance (tested there); here: storage, access,
+ * checked against the rules in docs/trade-facts.md §1–2 through lib/compliance (tested there); here: storage, access,
  * and that an analysis of a saved route and rig equals the model run directly (plain consistency).
  */
 import { readFileSync } from "node:fs";

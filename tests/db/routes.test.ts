@@ -1,7 +1,7 @@
 /**
  * Uploading routes through the data-access layer, the worker thread and PostgreSQL. Hostile inputs are the
- * security.md section C cases; every one must give a clear message and store nothing, and the request thread
- * must keep answering while a hostile file is read (security.md §0.3).
+ * docs/security.md §C cases; every one must give a clear message and store nothing, and the request thread
+ * must keep answering while a hostile file is read (docs/security.md §0.3).
  */
 import { readFileSync } from "node:fs";
 import { count, eq } from "drizzle-orm";
@@ -33,7 +33,7 @@ describe("uploading a route", () => {
     const bytes = fixture("kestrel-gap-1-1.gpx");
     const first = await uploadRoute(getDb(), planner, org, { bytes, fileName: "../../Kestrel Gap.gpx" });
     expect(first.duplicate).toBe(false);
-    expect(first.route.fileName).toBe("Kestrel Gap.gpx"); // folders stripped (security.md C17)
+    expect(first.route.fileName).toBe("Kestrel Gap.gpx"); // folders stripped (docs/security.md C17)
     expect(first.route.lengthM).toBeGreaterThan(200);
     const again = await uploadRoute(getDb(), planner, org, { bytes, fileName: "copy.gpx" });
     expect(again).toMatchObject({ duplicate: true, route: { id: first.route.id } });
@@ -45,7 +45,7 @@ describe("uploading a route", () => {
     expect(audit.map((a) => a.action)).toEqual(["route.uploaded"]);
   });
 
-  it("ten identical uploads at once store one route (security.md E9)", async () => {
+  it("ten identical uploads at once store one route (docs/security.md E9)", async () => {
     const bytes = fixture("tarnwick-saddle-1-0.gpx");
     const before = await rowCount();
     const results = await Promise.all(Array.from({ length: 10 }, () => uploadRoute(getDb(), planner, org, { bytes, fileName: "t.gpx" })));

@@ -73,7 +73,7 @@ test("a forged role or user id in the session update changes nothing", async ({ 
   expect((await request.post(`/api/organisations/${DEMO.teamId}/invitations`, { data: { email: "y@e2e.example", role: "viewer" } })).status()).toBe(403);
 });
 
-test("the internal middleware header does not open the signed-in area (security.md A1)", async ({ request }) => {
+test("the internal middleware header does not open the signed-in area (docs/security.md A1)", async ({ request }) => {
   for (const value of ["middleware", "proxy", "middleware:middleware:middleware:middleware:middleware"]) {
     const page = await request.get("/organisation", { headers: { "x-middleware-subrequest": value }, maxRedirects: 0 });
     expect(page.status()).toBe(307);

@@ -1,7 +1,7 @@
 import "server-only";
 import { AppError } from "@/lib/errors";
 
-/** Uploads larger than this are refused before they are read in full (security.md C8–C9). */
+/** Uploads larger than this are refused before they are read in full (docs/security.md C8–C9). */
 export const MAX_UPLOAD_BYTES = 20 * 1024 * 1024;
 
 const SIGNATURES: { bytes: number[]; what: string }[] = [

@@ -18,11 +18,11 @@ export interface ProcessedUpload {
 }
 export type RejectedUpload = { ok: false; problems: RouteProblem[]; tracks: TrackSummary[] };
 
-/** Limits of one parse (security.md §0.3: a hostile 100 KB file can otherwise hold a thread for 20 s). */
+/** Limits of one parse (docs/security.md §0.3: a hostile 100 KB file can otherwise hold a thread for 20 s). */
 export const PARSE_LIMITS = { timeoutMs: 20_000, maxOldGenerationSizeMb: 512, maxYoungGenerationSizeMb: 64 } as const;
 /**
  * Parses and models an uploaded GPX in a worker thread with a memory ceiling and a time limit, so the request
- * thread stays free: other requests keep answering while a hostile file is read (issue 3 §2).
+ * thread stays free: other requests keep answering while a hostile file is read (docs/security.md §0.3).
  */
 export function processUpload(text: string, trackId?: string): Promise<ProcessedUpload | RejectedUpload> {
   return runWorker<ProcessedUpload | RejectedUpload>("gpx-worker", { text, trackId }, PARSE_LIMITS, {

@@ -172,7 +172,7 @@ export async function deleteRoute(db: DbOrTx, actor: Actor, routeId: string) {
   });
 }
 
-/** Routes one organisation may keep (security.md C28). */
+/** Routes one organisation may keep (docs/security.md C28). */
 export const ROUTES_PER_ORGANISATION = 500;
 export async function countRoutes(db: DbOrTx, organisationId: string): Promise<number> {
   const [row] = await db.select({ n: sql<number>`count(*)::int` }).from(routes).where(eq(routes.organisationId, organisationId));

@@ -8,7 +8,7 @@ import { decodeUpload } from "./decode-upload";
 import { processUpload } from "./process-upload";
 import { countRoutes, createRoute, findRouteByContent, ROUTES_PER_ORGANISATION } from "./routes-dal";
 
-/** Uploads one person may make per hour (security.md C28). */
+/** Uploads one person may make per hour (docs/security.md C28). */
 export const UPLOADS_PER_HOUR = 60;
 
 /**

@@ -1,7 +1,7 @@
 /**
  * Brake-setup comparison: the same rig with other brakes on the same route and conditions.
- * Physics: a heavier rotor stores the same heat with a smaller rise (ΔT = Q/(m·c), thermal-model.md §1.5 with
- * hA → 0), and a vented rotor cools better than a solid one of the same mass (§1.4: solid ≈ 0.6 × vented),
+ * Physics: a heavier rotor stores the same heat with a smaller rise (ΔT = Q/(m·c), docs/model.md §7 with
+ * hA → 0), and a vented rotor cools better than a solid one of the same mass (docs/model.md §6.1: solid ≈ 0.6 × vented),
  * so both give lower peaks on the same descent; with cooling switched off, venting changes nothing.
  */
 

@@ -2,8 +2,8 @@
  * Convoy advice: every rig advised on the same route, a descents × rigs matrix with one cell per
  * rig per descent, the worst rig on each descent (the highest step class as planned), and the overall verdict
  * judged by the weakest rig. The cells are checked against independent heat runs (runHeatRun) of each rig, and
- * the physics is ordinary: a heavier rig on smaller brakes runs hotter on the same descent (thermal-model.md
- * §1.2: E = m·g·Δh into less thermal mass).
+ * the physics is ordinary: a heavier rig on smaller brakes runs hotter on the same descent (docs/model.md
+ * §3: E = m·g·Δh into less thermal mass).
  */
 
 import { describe, expect, it } from "vitest";

@@ -2,7 +2,7 @@
  * Gear and speed advice, proven by independent re-runs of the whole route at its own step (runHeatRun with the
  * advice as a stretch control): the advised gear or speed keeps every brake below the warm line, and the next
  * higher gear or 5 km/h more does not (it is the highest). The model:
- * lib/thermal (thermal-model.md §1–2). Rigs are the generic presets (estimates, not products).
+ * lib/thermal (docs/model.md §2–7). Rigs are the generic presets (estimates, not products).
  */
 
 import { describe, expect, it } from "vitest";

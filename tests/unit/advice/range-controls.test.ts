@@ -1,6 +1,6 @@
 /**
  * lib/thermal 1.1.0 stretch controls (HeatRunOptions.controls): a held-speed cap and a held gear on one stretch
- * only. Sources: the control semantics are ours (range-controls.ts); the rpm formula is thermal-model.md §2
+ * only. Sources: the control semantics are ours (range-controls.ts); the rpm formula is docs/model.md §3
  * (rpm = v·i_gear·i_final·60/(2π·r_dyn)); the converter factor is ModelParams.converterUnlockedFactor [E].
  */
 
@@ -44,7 +44,7 @@ describe("stretch controls", () => {
     expect(t.speedMs[t.length - 5]!).toBeGreaterThan(cap); // and the run-out speeds up again
   });
 
-  it("hold the gear on the stretch, capped at its rpm limit (thermal-model.md §2)", () => {
+  it("hold the gear on the stretch, capped at its rpm limit (docs/model.md §3, gear choice)", () => {
     const r = runHeatRun(profile, UTE_AND_CARAVAN, { controls: [{ ...range, gear: 2 }] });
     const model = resolveModel(UTE_AND_CARAVAN);
     const limit = fixedGearSpeedLimit(model, 2);

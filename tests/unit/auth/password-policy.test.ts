@@ -45,7 +45,7 @@ describe("password hashing", () => {
     expect(await verifyPassword("same phrase twice ", a)).toBe(false); // verified exactly as typed (ASVS 6.2.8)
   });
 
-  it("every character counts, past bcrypt's 72-byte limit (security.md B10)", async () => {
+  it("every character counts, past bcrypt's 72-byte limit (docs/security.md B10)", async () => {
     const hash = await hashPassword("a".repeat(72) + "X");
     expect(await verifyPassword("a".repeat(72) + "Y", hash)).toBe(false);
     const emoji = "🔥".repeat(64); // 64 characters, 256 bytes of UTF-8

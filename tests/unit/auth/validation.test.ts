@@ -1,6 +1,6 @@
 /**
  * Input schemas at the API boundary. E-mail addresses: the addr-spec forms zod accepts (quoted local parts
- * and header-breaking characters refused, as security.md B14/D14 asks); names never carry line breaks
+ * and header-breaking characters refused, as docs/security.md B14 and D14 ask); names never carry line breaks
  * (mail headers, RFC 5322 §2.2: a header field is one line unless folded).
  */
 import { describe, expect, it } from "vitest";

@@ -1,5 +1,5 @@
 /**
- * Mass checks against ratings. Definitions: trade-facts.md §1.1 — GVM includes the tow-ball mass [2nd motoring
+ * Mass checks against ratings. Definitions: docs/trade-facts.md §1.1 — GVM includes the tow-ball mass [2nd motoring
  * club; ADR definitions]; GCM is the loaded vehicle plus the trailer's axle loads [2nd, ADR wording]; loaded mass
  * must not exceed any rating [src state road-safety caravan checklist].
  */
@@ -44,7 +44,7 @@ describe("ratings against actual masses", () => {
   });
 });
 
-describe("payload left at full tow (trade-facts.md §1.1: GCM ≈ 5,850–6,000 kg for a 3,500 kg-rated dual-cab [2nd])", () => {
+describe("payload left at full tow (docs/trade-facts.md §1.4: GCM ≈ 5,850–6,000 kg for a 3,500 kg-rated dual-cab [2nd])", () => {
   it("5,950 kg GCM − 3,500 kg tow − 2,150 kg kerb leaves 300 kg, not the 650 kg the GVM suggests", () => {
     const trap = payloadTrap(UTE_AND_CARAVAN);
     expect(trap.applies).toBe(true);

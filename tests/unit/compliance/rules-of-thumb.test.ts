@@ -1,4 +1,4 @@
-/** Rules of thumb: always labelled common practice, never law (trade-facts.md §1.2–1.4). */
+/** Rules of thumb: always labelled common practice, never law (docs/trade-facts.md §1.5). */
 
 import { describe, expect, it } from "vitest";
 import { rulesOfThumb } from "@/lib/compliance";

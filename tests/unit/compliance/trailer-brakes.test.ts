@@ -1,5 +1,5 @@
 /**
- * Trailer-brake rules by region, checked against trade-facts.md §2 (sources named per block; all [2nd] unless
+ * Trailer-brake rules by region, checked against docs/trade-facts.md §2.2 (sources named per block; all [2nd] unless
  * marked [src]). Masses in kg.
  */
 

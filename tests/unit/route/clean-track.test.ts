@@ -50,7 +50,7 @@ describe("selectTrack", () => {
   });
 });
 
-describe("cleanTrack: points and length (security.md §C21)", () => {
+describe("cleanTrack: points and length (docs/security.md C21)", () => {
   it("one point: 'fewer than two distinct points', no NaN anywhere", () => {
     expect(failure(track(line(1, 10)))).toEqual([
       {
@@ -110,7 +110,7 @@ describe("cleanTrack: points and length (security.md §C21)", () => {
   });
 });
 
-describe("cleanTrack: elevation (security.md §C20)", () => {
+describe("cleanTrack: elevation (docs/security.md C20)", () => {
   it("no elevation at all: says so and how to export one that has it", () => {
     expect(failure(track(line(60, 10, 0, () => null)))).toEqual([
       {

@@ -1,6 +1,7 @@
 /**
- * lib/route must run unchanged in the browser and on the server (style.md: pure and isomorphic core; stack.md
- * §6 and security.md §0: gpxparser pollutes server globals and must not be imported). A static check of the
+ * lib/route must run unchanged in the browser and on the server (README.md, "Stack": the route and brake-heat
+ * cores are pure and isomorphic; docs/security.md §0.1: the DOM-based gpxparser pollutes server globals and
+ * must not be imported). A static check of the
  * imports of every module, so a stray Node-only import fails here rather than in a browser bundle.
  */
 import { readdirSync, readFileSync } from "node:fs";

@@ -1,5 +1,5 @@
 /**
- * Hostile and malformed inputs from /work/shared/reference/security.md §C (the cases a pure parser can
+ * Hostile and malformed inputs from docs/security.md §C (the cases a pure parser can
  * answer: C1, C3–C7, C10–C15, C18–C25). Each gives its own clear message; none gives a partial result.
  */
 import { describe, expect, it } from "vitest";

@@ -49,7 +49,7 @@ describe("parseGpx: GPX 1.0 file with a route (tests/fixtures/gpx/tarnwick-saddl
     expect(gpx.name).toBe("Tarnwick Saddle plan");
   });
 
-  it("reads rte/rtept as a route, not as an empty file (security.md §C23)", () => {
+  it("reads rte/rtept as a route, not as an empty file (docs/security.md C23)", () => {
     expect(gpx.tracks).toHaveLength(0);
     expect(gpx.routes).toHaveLength(1);
     expect(gpx.routes[0]?.id).toBe("route:0");
@@ -177,7 +177,7 @@ describe("parseGpx: elevation", () => {
   });
 });
 
-describe("listTracks (choosing one of several tracks, security.md §C22)", () => {
+describe("listTracks (choosing one of several tracks, docs/security.md C22)", () => {
   it("lists tracks then routes with points, segments and geodesic length without the gaps", () => {
     const gpx = ok(fixture("kestrel-gap-1-1.gpx"));
     const list = listTracks(gpx);

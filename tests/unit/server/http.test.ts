@@ -71,7 +71,7 @@ describe("route()", () => {
     expect(JSON.stringify(await crashed.json())).not.toContain("relation");
     expect(crashed.headers.get("cache-control")).toBe("no-store");
   });
-  it("refuses state-changing requests from another origin (security.md A9)", async () => {
+  it("refuses state-changing requests from another origin (docs/security.md A9)", async () => {
     const ok = route(async () => Response.json({ ok: true }));
     const foreign = new Request("http://127.0.0.1:3100/api/x", { method: "POST", headers: { origin: "https://evil.example", host: "127.0.0.1:3100" } });
     expect((await ok(foreign, {})).status).toBe(403);

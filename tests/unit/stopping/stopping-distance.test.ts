@@ -37,7 +37,7 @@ describe("kinematics and the pedal-limited model (plain physics)", () => {
     // 80 km/h = 22.222 m/s; 22.222² / (2 × 42.5) = 5.810 m/s²
     expect(meanDecelerationMs2(80 / 3.6, 42.5)).toBeCloseTo((80 / 3.6) ** 2 / 85, 9);
     expect(meanDecelerationMs2(80 / 3.6, 42.5)).toBeCloseTo(5.81, 2);
-    // thermal-model.md C5 [D]: 100 km/h at 6.43 m/s² stops in 60.00 m, 80 km/h at 5.0 m/s² in 49.38 m
+    // docs/validation.md C5a [D]: 100 km/h at 6.43 m/s² stops in 60.00 m, 80 km/h at 5.0 m/s² in 49.38 m
     expect((100 / 3.6) ** 2 / (2 * 6.43)).toBeCloseTo(60.0, 1);
     expect(meanDecelerationMs2(80 / 3.6, 49.38)).toBeCloseTo(5.0, 2);
     expect(() => meanDecelerationMs2(20, 0)).toThrow(RangeError);
@@ -115,7 +115,7 @@ describe("check values from practice", () => {
 
   it("after repeated hard stops the distance grew from about 50 m to just over 60 m (common practice, no published source)", () => {
     // Assumed: a ute of 2,650 kg on 0.78 m tyres (≈ 50 m cold by the model), full stops from 80 km/h one after
-    // another with no cooling between them (an upper bound on the heating: thermal-model.md §1.5, hA → 0).
+    // another with no cooling between them (an upper bound on the heating: docs/model.md §7, hA → 0).
     const model = resolveModel(soloRig(2650));
     let temps = cold(model);
     const distances: number[] = [];

@@ -1,5 +1,5 @@
 /**
- * Behaviours the trade describes (trade-facts.md §2 "Brake controllers", [2nd]): override brakes push on under
+ * Behaviours the trade describes (docs/trade-facts.md §2.1, brake controllers, [2nd]): override brakes push on under
  * engine braking; electric brakes are not applied by engine braking alone. Plus convoy runs, start states and
  * the optional temperature-dependent specific heat.
  */
@@ -16,7 +16,7 @@ const trailerWork = (brakeType: "override" | "electric"): number => {
   return summarizeDescents(r, [{ startM: 0, endM: 3000 }])[0]!.energy.brakeJ.trailer;
 };
 
-describe("trailer brakes under engine braking alone (trade-facts.md §2 [2nd])", () => {
+describe("trailer brakes under engine braking alone (docs/trade-facts.md §2.1 [2nd])", () => {
   it("electric brakes stay off when the engine holds the speed", () => expect(trailerWork("electric")).toBe(0));
   it("override brakes push on and heat the trailer", () => expect(trailerWork("override")).toBeGreaterThan(1e6));
 });
@@ -41,14 +41,14 @@ describe("convoy and start state", () => {
 });
 
 describe("specific heat", () => {
-  it("c(T) rising with temperature gives lower peaks than the conservative constant c (thermal-model.md §1.5)", () => {
+  it("c(T) rising with temperature gives lower peaks than the conservative constant c (docs/model.md §6.4)", () => {
     const peak = (variableSpecificHeat: boolean): number =>
       Math.max(...runHeatRun(constantGradeProfile(6000, -0.09), UTE_AND_CARAVAN, { params: { variableSpecificHeat } }).trace.rotorC[0]!);
     expect(peak(true)).toBeLessThan(peak(false));
   });
 });
 
-describe("time to a limit under constant heat ([D] thermal-model.md §1.5 closed form)", () => {
+describe("time to a limit under constant heat ([D] docs/model.md §7 closed form)", () => {
   it("t = −τ·ln(1 − (T_lim − T0)/(T_ss − T0)) lands exactly on the limit; Infinity when T_ss ≤ T_lim", () => {
     const t = timeToReachC(100, 120, 25, 2000, 20, 4600);
     expect(exactStepC(100, 25, 2000, 20, 4600, t)).toBeCloseTo(120, 9);

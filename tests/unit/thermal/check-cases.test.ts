@@ -1,5 +1,5 @@
 /**
- * The check cases of thermal-model.md §5 (C1–C16). Each names its basis beside it: [D] plain physics worked
+ * The check cases C1–C16 of docs/validation.md §1. Each names its basis beside it: [D] plain physics worked
  * from the stated inputs, [M] a constant or formula from memory (marked), [S] a public source.
  * g = 9.80665 m/s² throughout.
  */
@@ -55,7 +55,7 @@ describe("C1–C2: one stop from 80 km/h, 3,000 kg ([D] ½mv², adiabatic rise)"
   });
 });
 
-describe("C3–C4: published imperial examples ([S] articles in thermal-model.md §5 + [D])", () => {
+describe("C3–C4: published imperial examples ([S] the article “How hot do brakes get?” and T. Hall, “Braking Horsepower: How Much Does Your Car Have?”, Brake & Front End (docs/validation.md C3–C4) + [D])", () => {
   it("C3: 3,000 lb at 60 mph → 361,036 ft·lbf = 463.96 BTU; four 10 lb rotors at 0.13 BTU/lb°F rise 89.2 °F", () => {
     const ke = 0.5 * lbToKg(3000) * mphToMs(60) ** 2;
     expect(ke / J_PER_FT_LBF).toBeCloseTo(361_036, -1);
@@ -64,13 +64,16 @@ describe("C3–C4: published imperial examples ([S] articles in thermal-model.md
     const c = (0.13 * J_PER_BTU) / (KG_PER_LB_LOCAL * (5 / 9));
     const dK = exactStepC(0, 0, ke / 4, 0, lbToKg(10) * c, 1);
     expect(dK * 1.8).toBeCloseTo(89.2, 1);
-    // The article's 469.7 BTU / 90.3 °F is within 1.5 %.
+    // The article “How hot do brakes get?” gives 361,306.4 ft·lb, 469.7 BTU and 90.3 °F (its figure looks like a
+    // transcription slip); our exact 89.2 °F is within 1.5 % of it.
     expect(rel(dK * 1.8, 90.3)).toBeLessThan(0.015);
   });
 
   it("C4: 6,400 lb at 60 mph → 989.8 BTU (article 988 BTU); stop in 140 ft → 27.66 ft/s² = 0.860 g, 3.18 s", () => {
     const v = mphToMs(60);
     expect(rel((0.5 * lbToKg(6400) * v * v) / J_PER_BTU, 989.8)).toBeLessThan(5e-4);
+    // T. Hall, “Braking Horsepower: How Much Does Your Car Have?”, Brake & Front End: 988 BTU, a stop in 140 ft,
+    // “about three seconds”.
     expect(rel((0.5 * lbToKg(6400) * v * v) / J_PER_BTU, 988)).toBeLessThan(5e-3);
     const d = 140 * 0.3048;
     const a = (v * v) / (2 * d);
@@ -201,7 +204,7 @@ describe("C12: heating snub 120 → 60 km/h ([D]; R13-H Type-I / FMVSS 135 style
   });
 });
 
-describe("C13: GSRS reference form ([M] constants, FHWA-RD-81/185 via thermal-model.md §1.7; structure [D])", () => {
+describe("C13: GSRS reference form ([M] constants, FHWA-RD-81/185 (Johnson, DiMarco and Allen, 1982), docs/sources.md §3; structure [D])", () => {
   // W = 80,000 lb, θ = 0.06, V = 30 mph, L = 5 mi, Ti = 150 °F, T∞ = 90 °F. Constants from memory: structural check.
   const V = 30;
   const hpB = (80_000 * 0.06 * V) / 375 - ((460 + 17.25 * V) * V) / 375 - 73;

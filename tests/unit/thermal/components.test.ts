@@ -40,13 +40,13 @@ describe("road load (textbook forms: Fundamentals of Vehicle Dynamics ch. 4 [M])
   });
 });
 
-describe("engine braking (motoring model, thermal-model.md §2)", () => {
+describe("engine braking (motoring model, docs/model.md §3)", () => {
   it("FMEP fit passes through the [E] table values 1.5 / 2.0 / 2.6 bar at 2,000 / 3,000 / 4,000 rpm", () => {
     expect(motoringFmepPa(2000)).toBeCloseTo(1.5e5, 6);
     expect(motoringFmepPa(3000)).toBeCloseTo(2.0e5, 6);
     expect(motoringFmepPa(4000)).toBeCloseTo(2.6e5, 6);
   });
-  it("a 2.8 L engine motors ≈ 7, 14, 24 kW at 2,000, 3,000, 4,000 rpm (thermal-model.md §2 table, [E])", () => {
+  it("a 2.8 L engine motors ≈ 7, 14, 24 kW at 2,000, 3,000, 4,000 rpm (docs/model.md §3, [E])", () => {
     const kw = (rpm: number): number => engineBrakingWheelPowerW(rpm, 0.0028, 1, 1, 800) / 1000;
     expect(kw(2000)).toBeCloseTo(7, 0);
     expect(kw(3000)).toBeCloseTo(14, 6);
@@ -77,7 +77,7 @@ describe("engine braking (motoring model, thermal-model.md §2)", () => {
   });
 });
 
-describe("heat split (thermal-model.md §1.3; trade-facts.md §2 brake controllers)", () => {
+describe("heat split (docs/model.md §5; docs/trade-facts.md §2.1, brake controllers)", () => {
   const out = new Float64Array(4);
   it("electric: engine first, trailer takes gain × mass share of the service-brake remainder", () => {
     expect(Array.from(splitRetardingWork(out, 100, 30, "electric", 0.5, 1, 0.65))).toEqual([30, 22.75, 12.25, 35]);
@@ -99,16 +99,16 @@ describe("heat split (thermal-model.md §1.3; trade-facts.md §2 brake controlle
 });
 
 describe("cooling pieces", () => {
-  it("hA(v) = hA_0 + a·v^0.8 ([E] §1.4): ≈ 10 W/K at 60 km/h for the reference vented rotor", () => {
+  it("hA(v) = hA_0 + a·v^0.8 ([E] docs/model.md §6.1): ≈ 10 W/K at 60 km/h for the reference vented rotor", () => {
     expect(convectiveConductance(1.25, 0.9, kmhToMs(60))).toBeCloseTo(1.25 + 0.9 * kmhToMs(60) ** 0.8, 10);
     expect(convectiveConductance(1.25, 0.9, kmhToMs(60))).toBeGreaterThan(9);
     expect(convectiveConductance(1.25, 0.9, kmhToMs(60))).toBeLessThan(11);
   });
-  it("solid discs cool 0.6× and drums 0.5× a vented disc of the same size ([E] §1.4)", () => {
+  it("solid discs cool 0.6× and drums 0.5× a vented disc of the same size ([E] docs/model.md §6.1)", () => {
     expect(brakeConductanceScale("solid-disc", 0.33)).toBeCloseTo(0.6, 10);
     expect(brakeConductanceScale("drum", 0.33)).toBeCloseTo(0.5, 10);
   });
-  it("c(T) ≈ 460 + 0.4·(T − 20): ≈ 540 at 200 °C, ≈ 610 at 400 °C, held above 600 °C ([M] §2)", () => {
+  it("c(T) ≈ 460 + 0.4·(T − 20): ≈ 540 at 200 °C, ≈ 610 at 400 °C, held above 600 °C ([M] docs/model.md §6.4)", () => {
     expect(specificHeat(200, 460, 0.4)).toBeCloseTo(532, 6);
     expect(specificHeat(400, 460, 0.4)).toBeCloseTo(612, 6);
     expect(specificHeat(900, 460, 0.4)).toBeCloseTo(692, 6);
@@ -159,7 +159,7 @@ describe("masses and presets", () => {
       expect(p.name).toContain(PRESET_LABEL);
     }
   });
-  it("the ute + caravan combination CdA defaults to ≈ 2.5 m² ([E] thermal-model.md §2)", () => {
+  it("the ute + caravan combination CdA defaults to ≈ 2.5 m² ([E] docs/model.md §13.1)", () => {
     expect(resolveModel(UTE_AND_CARAVAN).params.cdaM2).toBeCloseTo(2.5, 10);
   });
 });

@@ -1,5 +1,5 @@
 /**
- * Property tests of the heat run (issue 4 §5): energy conservation, monotonicity, step-size independence, no
+ * Property tests of the heat run (docs/validation.md §3): energy conservation, monotonicity, step-size independence, no
  * temperature below ambient. Basis: plain physics [D] (first law; the lumped ODE's exact solution).
  */
 

@@ -1,5 +1,5 @@
 /**
- * Range checks against facts from practice (issue 4 §5). These are COMMON PRACTICE, NO PUBLISHED SOURCE:
+ * Range checks against facts from practice (docs/validation.md §4). These are COMMON PRACTICE, NO PUBLISHED SOURCE:
  * rotors can pass 300 °C when towing down a long, steep hill; about 600 °C is extreme race-track territory;
  * a stock dual-cab ute stopped from 80 km/h in 42.5 m (5.81 m/s²); with about 500 kg of accessories and bigger
  * tyres it needed about 57 m (4.33 m/s²).

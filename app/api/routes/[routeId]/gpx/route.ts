@@ -6,7 +6,7 @@ import { requireSessionUser } from "@/lib/server/session";
 type Context = { params: Promise<{ routeId: string }> };
 
 /**
- * GET /api/routes/:id/gpx: the original file, always as a download with a generated name (security.md C16–C17),
+ * GET /api/routes/:id/gpx: the original file, always as a download with a generated name (docs/security.md C16–C17),
  * never rendered inline, whatever it contains.
  */
 export const GET = route(async (_request, { params }: Context) => {
