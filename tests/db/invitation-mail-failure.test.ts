@@ -16,7 +16,9 @@ it("keeps the invitation and returns its link when the mail cannot be handed ove
   const created = await createInvitation(getDb(), owner, orgId, { email: "later@test.example", role: "viewer" });
   const result = await sendInvitationMail(created);
   expect(result.mailSent).toBe(false);
-  expect(result.link).toBe(`http://127.0.0.1:3100/invite?token=${created.token}`);
+  // the app's own address (NEXTAUTH_URL, which the test command sets from TEST_PORT)
+  expect(process.env.NEXTAUTH_URL).toMatch(/^http:\/\/127\.0\.0\.1:\d+$/);
+  expect(result.link).toBe(`${process.env.NEXTAUTH_URL}/invite?token=${created.token}`);
   const rows = await getDb().select().from(invitations).where(eq(invitations.id, created.invitation.id));
   expect(rows).toHaveLength(1);
 });
