@@ -46,7 +46,8 @@ if ./scripts/test.sh >"$DIR/test.log" 2>&1; then
   sed -n '/Summary/,$p' "$DIR/test.log"
   say "both commands passed"
 else
-  tail -n 60 "$DIR/test.log"
+  grep -aE "FAIL|✘|×|Error:" "$DIR/test.log" | sed 's/\x1b\[[0-9;]*m//g' | head -n 40 || true
+  sed -n '/Summary/,$p' "$DIR/test.log"
   say "the test command failed"
   exit 1
 fi
