@@ -7,6 +7,7 @@
  */
 
 import { toDistanceUnit, type UnitSystem } from "@/lib/units";
+import { lowerBound } from "./heat-colours";
 
 /** A trace to draw: distances and rotor temperatures per position (°C). */
 export interface ChartTrace {
@@ -65,17 +66,6 @@ function fill(row: ChartRow, prefix: "" | "w", trace: ChartTrace, band: ChartBan
   });
 }
 
-/** @private First index whose distance is ≥ m. */
-function lowerBound(d: ArrayLike<number>, m: number): number {
-  let lo = 0;
-  let hi = d.length;
-  while (lo < hi) {
-    const mid = (lo + hi) >> 1;
-    if ((d[mid] as number) < m) lo = mid + 1;
-    else hi = mid;
-  }
-  return lo;
-}
 
 /**
  * The chart's rows.

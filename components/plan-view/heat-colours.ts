@@ -45,8 +45,8 @@ function classIndex(c: StepClass | number): number {
   return typeof c === "number" ? c : ORDER.indexOf(c);
 }
 
-/** @private First sample at or after `m` (binary search). */
-function lowerBound(d: ArrayLike<number>, m: number): number {
+/** First sample at or after `m` (binary search). */
+export function lowerBound(d: ArrayLike<number>, m: number): number {
   let lo = 0;
   let hi = d.length;
   while (lo < hi) {

@@ -11,7 +11,7 @@
  */
 
 import type { PlacedWaypoint } from "@/lib/route";
-import type { HeatRunResult, PreparedRoute } from "@/lib/thermal";
+import { nearestIndex, type HeatRunResult, type PreparedRoute } from "@/lib/thermal";
 import type { AdviceSettings } from "./settings";
 import type { AdviceLine, StopPlace } from "./types";
 
@@ -146,20 +146,5 @@ function nearestWaypoint(waypoints: readonly PlacedWaypoint[], atM: number, snap
   return best;
 }
 
-/**
- * Index of the sample nearest a distance (binary search).
- * @param d distances, m (non-decreasing)
- * @param atM distance, m
- * @returns index
- * @example nearestIndex(Float64Array.from([0, 10, 20]), 12) // 1
- */
-export function nearestIndex(d: Float64Array, atM: number): number {
-  let lo = 0;
-  let hi = d.length - 1;
-  while (hi - lo > 1) {
-    const mid = (lo + hi) >> 1;
-    if ((d[mid] as number) <= atM) lo = mid;
-    else hi = mid;
-  }
-  return Math.abs((d[hi] as number) - atM) < Math.abs((d[lo] as number) - atM) ? hi : lo;
-}
+/** The sample nearest a distance (lib/thermal), re-exported for the advice modules that place stops. */
+export { nearestIndex };

@@ -13,6 +13,7 @@
  * is fitted, the engine-braking scale kept, and a note says so.
  */
 
+import { nearestIndex } from "./nearest-index";
 import type { CoolDownStop, HeatRunOptions, HeatRunResult } from "./heat-run";
 import { runPrepared } from "./heat-run";
 import type { PreparedRoute } from "./prepare-route";
@@ -158,7 +159,7 @@ export function calibrate(
     } else if (reading.tempC < ambientC - s.belowAmbientK) {
       flagged.push({ reading, reason: `cooler than the air (${ambientC} °C): a brake cannot be; check the reading or the ambient temperature`, reachableC: null });
     } else {
-      placed.push({ reading, sample: nearestSample(d, reading.atM), position, standS: 60 * (reading.minutesAfterStop ?? 0) });
+      placed.push({ reading, sample: nearestIndex(d, reading.atM), position, standS: 60 * (reading.minutesAfterStop ?? 0) });
     }
   }
   let runs = 1;
@@ -260,18 +261,6 @@ function readingValue(result: HeatRunResult, p: Placed, ambientC: number): numbe
   const arrival = (result.trace.rotorC[p.position] as Float64Array)[p.sample] as number;
   if (p.standS <= 0) return arrival;
   return coolBrakeAtStandstill(result.positions[p.position]!, arrival, ambientC, p.standS);
-}
-
-/** @private Index of the sample nearest a distance. */
-function nearestSample(d: Float64Array, atM: number): number {
-  let lo = 0;
-  let hi = d.length - 1;
-  while (hi - lo > 1) {
-    const mid = (lo + hi) >> 1;
-    if ((d[mid] as number) <= atM) lo = mid;
-    else hi = mid;
-  }
-  return Math.abs((d[hi] as number) - atM) < Math.abs((d[lo] as number) - atM) ? hi : lo;
 }
 
 /** @private `count` logs evenly spaced from log(lo) to log(hi). */

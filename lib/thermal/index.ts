@@ -26,6 +26,7 @@ export {
   radiatingAreaM2,
 } from "./cooling";
 export { exactStepC, timeToReachC } from "./exact-step";
+export { nearestIndex } from "./nearest-index";
 export { heatPartitionRotor, splitRetardingWork, type MaterialProperties } from "./partition";
 export { FLUID_PROXY_LABEL, fluidProxyStepC } from "./fluid";
 export * from "./thresholds";
