@@ -13,7 +13,11 @@ DIR="$(mktemp -d)"
 cleanup() {
   (cd "$DIR/repo" 2>/dev/null && ./scripts/stop.sh >/dev/null 2>&1) || true
   [ -n "${APP_PID:-}" ] && kill -- "-$APP_PID" 2>/dev/null || true
-  [ "${KEEP_CLONE:-0}" = 1 ] || rm -rf "$DIR"
+  if [ "${KEEP_CLONE:-0}" != 1 ]; then
+    # As root the clone's cluster may live outside it (scripts/postgres.sh): remove that folder too.
+    [ -L "$DIR/repo/.local/pg" ] && rm -rf "$(readlink -f "$DIR/repo/.local/pg")"
+    rm -rf "$DIR"
+  fi
 }
 trap cleanup EXIT
 say() { printf '[fresh-clone] %s\n' "$*"; }
