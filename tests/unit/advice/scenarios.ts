@@ -32,15 +32,7 @@ export function oneDescent(grade: number, lengthM: number): OneDescent {
 /** The ute and tandem caravan preset (5,360 kg, electric drums, gain 1). */
 export const UTE_VAN: Rig = UTE_AND_CARAVAN;
 
-/**
- * The same rig without a low range (a two-wheel-drive tow vehicle): where stops are the subject, low range
- * would otherwise hold most steep descents without one.
- */
-export function twoWheelDrive(rig: Rig): Rig {
-  const t = rig.vehicle.transmission;
-  const { lowRangeRatio: _dropped, ...transmission } = t;
-  return { ...rig, vehicle: { ...rig.vehicle, transmission } };
-}
+export { twoWheelDrive } from "../thermal/rig-helpers";
 
 /** The mid-size ute alone at 2,600 kg. */
 export const SOLO_UTE: Rig = soloRig(2600);

@@ -8,6 +8,7 @@ import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { beforeAll, describe, expect, it } from "vitest";
 import { UTE_AND_CARAVAN } from "@/lib/thermal";
+import { twoWheelDrive } from "../thermal/rig-helpers";
 
 const GPX = "tests/fixtures/gpx/demo/tallowmere-to-kestrel-gap.gpx";
 const RIG = ["--rig", "preset:ute-and-caravan"];
@@ -109,9 +110,8 @@ describe("--set", () => {
 
 /** The preset ute and caravan without a low range (a 2WD tow vehicle), whose advice on the demo pass has stops. */
 function twoWheelDriveRig(): string {
-  const { lowRangeRatio: _dropped, ...transmission } = UTE_AND_CARAVAN.vehicle.transmission;
   const file = join(tmpdir(), `rig-2wd-${process.pid}.json`);
-  writeFileSync(file, JSON.stringify({ ...UTE_AND_CARAVAN, vehicle: { ...UTE_AND_CARAVAN.vehicle, transmission } }));
+  writeFileSync(file, JSON.stringify(twoWheelDrive(UTE_AND_CARAVAN)));
   return file;
 }
 

@@ -22,7 +22,7 @@ import {
   type Rig,
 } from "@/lib/thermal";
 import { constantGradeProfile, stretchesProfile } from "./route-helpers";
-import { soloRig, uteCaravanRig } from "./rig-helpers";
+import { soloRig, twoWheelDrive, uteCaravanRig } from "./rig-helpers";
 
 const sum = (a: Float64Array) => a.reduce((x, y) => x + y, 0);
 const peak = (r: HeatRunResult, j: number) => Math.max(...(r.trace.rotorC[j] as Float64Array));
@@ -178,9 +178,7 @@ describe("low range ([D]: a larger overall ratio turns the engine faster, and mo
   });
 
   it("a rig without a low range refuses a low-range gear with an exact message", () => {
-    const { lowRangeRatio: _dropped, ...transmission } = UTE_AND_CARAVAN.vehicle.transmission;
-    const twoWd: Rig = { ...UTE_AND_CARAVAN, vehicle: { ...UTE_AND_CARAVAN.vehicle, transmission } };
-    expect(() => runHeatRun(steep, twoWd, { controls: [{ ...descent, gear: 7 }] })).toThrow(
+    expect(() => runHeatRun(steep, twoWheelDrive(UTE_AND_CARAVAN), { controls: [{ ...descent, gear: 7 }] })).toThrow(
       new RangeError("options.controls[0].gear must be a whole number from 1 to 6"),
     );
   });

@@ -45,3 +45,13 @@ export function uteCaravanRig(totalKg: number, trailer: Partial<Trailer> = {}, v
     },
   };
 }
+
+/**
+ * The same rig without a low range (a two-wheel-drive tow vehicle): where stops are the subject, low range
+ * would otherwise hold most steep descents without one.
+ */
+export function twoWheelDrive(rig: Rig): Rig {
+  const t = rig.vehicle.transmission;
+  const { lowRangeRatio: _dropped, ...transmission } = t;
+  return { ...rig, vehicle: { ...rig.vehicle, transmission } };
+}

@@ -151,19 +151,20 @@ export function PlanView({
 
   // The what-if's band (lib/thermal runBand, about 20 ms on 300 km) runs after the nominal one, once the browser
   // is idle, so typing stays smooth; a newer what-if cancels a pending one.
-  const [whatIfBand, setWhatIfBand] = useState<{ run: WhatIfResult; band: HeatBand | null; ms: number } | null>(null);
+  const [whatIfBand, setWhatIfBand] = useState<{ run: WhatIfResult; band: HeatBand | null; ms: number; error?: string } | null>(null);
   useEffect(() => {
     if (!model.route || !whatIfRun) return;
     const route = model.route;
     return whenIdle(() => {
       const t0 = performance.now();
-      let band: HeatBand | null = null;
+      // The nominal run stands on its own; a band that fails says why in the status line.
       try {
-        band = runBand(route, whatIfRun.rig, whatIfRun.options, {}, whatIfRun.result);
-      } catch {
-        band = null; // the nominal run stands on its own; the chart then says no range is drawn
+        const band = runBand(route, whatIfRun.rig, whatIfRun.options, {}, whatIfRun.result);
+        setWhatIfBand({ run: whatIfRun, band, ms: performance.now() - t0 });
+      } catch (error) {
+        const message = error instanceof Error ? error.message : String(error);
+        setWhatIfBand({ run: whatIfRun, band: null, ms: performance.now() - t0, error: message });
       }
-      setWhatIfBand({ run: whatIfRun, band, ms: performance.now() - t0 });
     });
   }, [model.route, whatIfRun]);
   const bandNow = whatIfRun && whatIfBand?.run === whatIfRun ? whatIfBand : null;
@@ -246,7 +247,7 @@ export function PlanView({
         : run && "error" in run
           ? `The model refused this what-if: ${run.error}`
           : run && "ms" in run
-            ? `Recomputed in the browser in ${run.ms.toFixed(0)} ms${bandNow ? (bandNow.band ? `; likely range in ${bandNow.ms.toFixed(0)} ms more` : "; the likely range could not be worked out") : "; working out the likely range…"}.`
+            ? `Recomputed in the browser in ${run.ms.toFixed(0)} ms${bandNow ? (bandNow.band ? `; likely range in ${bandNow.ms.toFixed(0)} ms more` : `; the likely range could not be worked out (${bandNow.error})`) : "; working out the likely range…"}.`
             : null
     : null;
 
